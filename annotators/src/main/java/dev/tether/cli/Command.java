@@ -1,0 +1,15 @@
+package dev.tether.cli;
+
+import java.io.IOException;
+import java.io.PrintStream;
+
+/** One verb of the command line. */
+interface Command {
+    String name();
+
+    /** One line: the command and its options. */
+    String usage();
+
+    /** Runs with the whole argument vector ({@code args[0]} is the command name); returns the exit code. */
+    int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException;
+}

@@ -1,0 +1,55 @@
+package dev.tether.cli;
+
+import dev.tether.counts.QuadrupleCounts;
+import dev.tether.counts.SubTuple;
+import dev.tether.model.ModelFile;
+import dev.tether.model.ModelSource;
+import dev.tether.model.TetherModel;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.util.Set;
+
+/** {@code tether inspect}: what a model file holds. */
+final class InspectCommand implements Command {
+    @Override
+    public String name() {
+        return "inspect";
+    }
+
+    @Override
+    public String usage() {
+        return "inspect MODEL|default";
+    }
+
+    @Override
+    public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of());
+        if (a.positional().size() != 1) throw new UsageException("give one model file, or 'default'");
+        String path = a.positional().get(0);
+        TetherModel m = ModelLocator.load(path);
+        QuadrupleCounts q = m.quadruples();
+        out.println("model          " + path + (ModelLocator.DEFAULT.equals(path) ? " (" + TetherModel.BUNDLED_RESOURCE + ")" : ""));
+        out.println("id             " + m.id());
+        out.println("format         version " + ModelFile.FORMAT_VERSION);
+        out.println("normalization  " + m.normalizerVersion());
+        out.println("sources");
+        for (ModelSource s : m.sources()) {
+            out.printf("  %-12s %-36s %,10d items%s  sha256 %s%n", s.kind(), s.name(), s.items(),
+                    s.skipped() > 0 ? String.format(" (%,d skipped)", s.skipped()) : "", s.sha256().substring(0, Math.min(16, s.sha256().length())));
+        }
+        out.printf("vocabulary     %,d words, %,d prepositions%n", q.words().size(), q.prepositions().size());
+        out.printf("quadruples     %,.0f counted, %,.0f attached to the noun (%.1f%%)%n", q.total(), q.nounAttachments(),
+                q.total() > 0 ? 100 * q.nounAttachments() / q.total() : 0);
+        out.println("distinct keys per back-off level (all prepositions)");
+        out.printf("  quadruple            %,10d%n", q.distinct(SubTuple.VERB_NOUN1_NOUN2));
+        out.printf("  triples  v-n1-p      %,10d%n", q.distinct(SubTuple.VERB_NOUN1));
+        out.printf("           v-p-n2      %,10d%n", q.distinct(SubTuple.VERB_NOUN2));
+        out.printf("           n1-p-n2     %,10d%n", q.distinct(SubTuple.NOUN1_NOUN2));
+        out.printf("  pairs    v-p         %,10d%n", q.distinct(SubTuple.VERB));
+        out.printf("           n1-p        %,10d%n", q.distinct(SubTuple.NOUN1));
+        out.printf("           p-n2        %,10d%n", q.distinct(SubTuple.NOUN2));
+        out.printf("approximate heap of the count tables: %.1f MB%n", q.approximateBytes() / 1e6);
+        return Tether.OK;
+    }
+}

@@ -1,0 +1,57 @@
+package dev.tether.cli;
+
+import dev.tether.io.QuadrupleReader;
+import dev.tether.io.QuadrupleSet;
+import dev.tether.model.ModelFile;
+import dev.tether.model.ModelTrainer;
+import dev.tether.model.TetherModel;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+/** {@code tether train}: counts training sources into a new model file. */
+final class TrainCommand implements Command {
+    @Override
+    public String name() {
+        return "train";
+    }
+
+    @Override
+    public String usage() {
+        return "train --quadruples FILE... [--base MODEL|default] [--skip-malformed] --out MODEL";
+    }
+
+    @Override
+    public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "base", "out"), Set.of("skip-malformed"));
+        Path target = Path.of(a.required("out"));
+        if (!a.has("quadruples")) {
+            throw new UsageException("give at least one training source with --quadruples");
+        }
+        boolean skip = a.has("skip-malformed");
+        QuadrupleReader reader = new QuadrupleReader(skip);
+        List<QuadrupleSet> sets = new ArrayList<>();
+        for (String f : a.values("quadruples")) sets.add(reader.read(Path.of(f)));
+
+        ModelTrainer trainer = new ModelTrainer();
+        String base = a.value("base", null);
+        if (base != null) trainer.addModel(ModelLocator.load(base), ModelLocator.DEFAULT.equals(base) ? "default" : Path.of(base).getFileName().toString());
+        long skipped = 0;
+        for (QuadrupleSet s : sets) {
+            trainer.addQuadruples(s);
+            skipped += s.skipped();
+            out.printf("%-40s %,9d quadruples%s%n", s.name(), s.quadruples().size(),
+                    s.skipped() > 0 ? String.format("  (%,d malformed lines skipped)", s.skipped()) : "");
+            for (String reason : s.skippedReasons()) out.println("    skipped " + reason);
+        }
+        TetherModel model = trainer.build();
+        ModelFile.write(model, target);
+        out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
+                skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
+        return Tether.OK;
+    }
+}

@@ -1,0 +1,232 @@
+package dev.tether.model;
+
+import dev.tether.counts.QuadrupleCounts;
+import dev.tether.io.Sha256;
+
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.EOFException;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.zip.Deflater;
+import java.util.zip.DeflaterOutputStream;
+import java.util.zip.Inflater;
+import java.util.zip.InflaterInputStream;
+
+/**
+ * Tether's model file. Layout:
+ * <pre>
+ *   "TETHER-MODEL\n"          13 bytes, identifies the file
+ *   format version            int
+ *   payload length            long, bytes of the compressed payload
+ *   payload                   deflate-compressed sections: count, then per section its name, length and bytes
+ *   SHA-256                   32 bytes over everything before it
+ * </pre>
+ * Sections are {@code info} (normalizer version and sources) and {@code quadruples} (the quadruple counts); a reader
+ * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
+ * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
+ */
+public final class ModelFile {
+    public static final int FORMAT_VERSION = 1;
+    private static final byte[] MAGIC = "TETHER-MODEL\n".getBytes(StandardCharsets.US_ASCII);
+    private static final int DIGEST_BYTES = 32;
+    private static final String INFO = "info";
+    private static final String QUADRUPLES = "quadruples";
+
+    private ModelFile() {
+    }
+
+    /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
+    public static void write(TetherModel model, Path target) throws IOException {
+        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples());
+        Path folder = target.toAbsolutePath().getParent();
+        if (folder != null) Files.createDirectories(folder);
+        if (Files.isDirectory(target)) {
+            throw new IOException(target + " is a directory; give a file name for the model");
+        }
+        Path temporary = Files.createTempFile(folder, "." + target.getFileName(), ".partial");
+        try {
+            try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+                ByteBuffer buffer = ByteBuffer.wrap(bytes);
+                while (buffer.hasRemaining()) channel.write(buffer);
+                channel.force(true);
+            }
+            readableByAll(temporary);
+            Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } finally {
+            Files.deleteIfExists(temporary);
+        }
+    }
+
+    /** Temporary files are created private; a model is meant to be shared. */
+    private static void readableByAll(Path file) throws IOException {
+        if (Files.getFileStore(file).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+        }
+    }
+
+    /** Reads the model at {@code file}; a foreign, truncated or damaged file fails with a message naming it. */
+    public static TetherModel read(Path file) throws IOException {
+        if (Files.isDirectory(file)) {
+            throw new ModelFormatException(file + " is a directory, not a Tether model file; give the path of a model written by 'tether train'");
+        }
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new ModelFormatException(file + " does not exist; give the path of a model written by 'tether train'");
+        }
+        return decode(bytes, file.toString());
+    }
+
+    /** Reads a model from a stream (for example a classpath resource) called {@code name} in messages. */
+    public static TetherModel read(InputStream in, String name) throws IOException {
+        return decode(in.readAllBytes(), name);
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples) throws IOException {
+        Map<String, byte[]> sections = new LinkedHashMap<>();
+        sections.put(INFO, section(out -> {
+            out.writeUTF(normalizerVersion);
+            out.writeInt(sources.size());
+            for (ModelSource s : sources) {
+                out.writeUTF(s.name());
+                out.writeUTF(s.kind());
+                out.writeLong(s.items());
+                out.writeLong(s.skipped());
+                out.writeUTF(s.sha256());
+            }
+        }));
+        sections.put(QUADRUPLES, section(quadruples::write));
+
+        ByteArrayOutputStream payload = new ByteArrayOutputStream();
+        Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);
+        try (DataOutputStream out = new DataOutputStream(new DeflaterOutputStream(payload, deflater, 1 << 16))) {
+            out.writeInt(sections.size());
+            for (Map.Entry<String, byte[]> e : sections.entrySet()) {
+                out.writeUTF(e.getKey());
+                out.writeInt(e.getValue().length);
+                out.write(e.getValue());
+            }
+        } finally {
+            deflater.end();
+        }
+        ByteArrayOutputStream file = new ByteArrayOutputStream();
+        DataOutputStream out = new DataOutputStream(file);
+        out.write(MAGIC);
+        out.writeInt(FORMAT_VERSION);
+        out.writeLong(payload.size());
+        payload.writeTo(out);
+        out.flush();
+        byte[] body = file.toByteArray();
+        byte[] digest = Sha256.newDigest().digest(body);
+        byte[] all = Arrays.copyOf(body, body.length + DIGEST_BYTES);
+        System.arraycopy(digest, 0, all, body.length, DIGEST_BYTES);
+        return all;
+    }
+
+    static TetherModel decode(byte[] bytes, String name) throws ModelFormatException {
+        int header = MAGIC.length + 4 + 8;
+        if (bytes.length < MAGIC.length || !Arrays.equals(Arrays.copyOf(bytes, MAGIC.length), MAGIC)) {
+            throw new ModelFormatException(name + " is not a Tether model file (it lacks the model header); "
+                    + "give the path of a model written by 'tether train'");
+        }
+        if (bytes.length < header + DIGEST_BYTES) {
+            throw new ModelFormatException(name + " is truncated (" + bytes.length + " bytes); copy or train it again");
+        }
+        ByteBuffer head = ByteBuffer.wrap(bytes, MAGIC.length, 12);
+        int version = head.getInt();
+        long payloadLength = head.getLong();
+        if (version != FORMAT_VERSION) {
+            throw new ModelFormatException(name + " has model format version " + version + "; this build of Tether reads version "
+                    + FORMAT_VERSION + ". Retrain the model with this version ('tether train').");
+        }
+        if (payloadLength < 0 || header + payloadLength + DIGEST_BYTES != bytes.length) {
+            throw new ModelFormatException(name + " is truncated or has trailing bytes (expected "
+                    + (header + payloadLength + DIGEST_BYTES) + " bytes, found " + bytes.length + "); copy or train it again");
+        }
+        int bodyLength = bytes.length - DIGEST_BYTES;
+        byte[] expected = Arrays.copyOfRange(bytes, bodyLength, bytes.length);
+        var digest = Sha256.newDigest();
+        digest.update(bytes, 0, bodyLength);
+        byte[] actual = digest.digest();
+        if (!Arrays.equals(expected, actual)) {
+            throw new ModelFormatException(name + " is damaged: its checksum does not match its content; copy or train it again");
+        }
+        try {
+            Map<String, byte[]> sections = sections(bytes, header, (int) payloadLength);
+            byte[] info = sections.get(INFO);
+            byte[] quads = sections.get(QUADRUPLES);
+            if (info == null || quads == null) {
+                throw new ModelFormatException(name + " lacks the sections 'info' and 'quadruples'; retrain it with 'tether train'");
+            }
+            DataInputStream in = new DataInputStream(new ByteArrayInputStream(info));
+            String normalizer = in.readUTF();
+            int n = in.readInt();
+            List<ModelSource> sources = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                sources.add(new ModelSource(in.readUTF(), in.readUTF(), in.readLong(), in.readLong(), in.readUTF()));
+            }
+            QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
+            return new TetherModel(normalizer, sources, counts, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+        } catch (IOException | RuntimeException e) {
+            throw new ModelFormatException(name + " is damaged: its content cannot be read (" + e.getMessage()
+                    + "); copy or train it again", e);
+        }
+    }
+
+    /** A fingerprint of the content that would be written for these parts. */
+    static String fingerprint(byte[] encoded) {
+        return Sha256.hex(Arrays.copyOfRange(encoded, 0, encoded.length - DIGEST_BYTES)).substring(0, 12);
+    }
+
+    private static Map<String, byte[]> sections(byte[] bytes, int offset, int length) throws IOException {
+        Map<String, byte[]> sections = new LinkedHashMap<>();
+        Inflater inflater = new Inflater();
+        try (DataInputStream in = new DataInputStream(new InflaterInputStream(
+                new ByteArrayInputStream(bytes, offset, length), inflater, 1 << 16))) {
+            int count = in.readInt();
+            if (count < 0 || count > 1000) throw new IOException("implausible section count " + count);
+            for (int i = 0; i < count; i++) {
+                String name = in.readUTF();
+                int size = in.readInt();
+                if (size < 0) throw new IOException("negative section size");
+                byte[] data = new byte[size];
+                in.readFully(data);
+                sections.put(name, data);
+            }
+        } catch (EOFException e) {
+            throw new IOException("payload ends early", e);
+        } finally {
+            inflater.end();
+        }
+        return sections;
+    }
+
+    private interface SectionWriter {
+        void write(DataOutputStream out) throws IOException;
+    }
+
+    private static byte[] section(SectionWriter writer) throws IOException {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        try (DataOutputStream out = new DataOutputStream(bytes)) {
+            writer.write(out);
+        }
+        return bytes.toByteArray();
+    }
+}

@@ -1,0 +1,60 @@
+package dev.tether.model;
+
+import dev.tether.counts.QuadrupleCounts;
+import dev.tether.vocabulary.WordNormalizer;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.List;
+
+/**
+ * A trained model: the counts the scorers read, the normalization they were counted under, and where they came
+ * from. Immutable; load it once and share it across threads and engine instances.
+ */
+public final class TetherModel {
+    /** Classpath location of the shipped default model. */
+    public static final String BUNDLED_RESOURCE = "/dev/tether/model/default.tether";
+
+    private final String normalizerVersion;
+    private final List<ModelSource> sources;
+    private final QuadrupleCounts quadruples;
+    private final String id;
+    private final WordNormalizer normalizer = new WordNormalizer();
+
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples, String id) {
+        this.normalizerVersion = normalizerVersion;
+        this.sources = List.copyOf(sources);
+        this.quadruples = quadruples;
+        this.id = id;
+    }
+
+    public String normalizerVersion() { return normalizerVersion; }
+    public List<ModelSource> sources() { return sources; }
+    public QuadrupleCounts quadruples() { return quadruples; }
+    public WordNormalizer normalizer() { return normalizer; }
+
+    /** A short fingerprint of the model's content (the start of its checksum), recorded with every decision. */
+    public String id() { return id; }
+
+    /** The shipped default model, loaded from the classpath once per class loader. */
+    public static TetherModel bundled() {
+        return Bundled.MODEL;
+    }
+
+    private static final class Bundled {
+        static final TetherModel MODEL = load();
+
+        private static TetherModel load() {
+            try (InputStream in = TetherModel.class.getResourceAsStream(BUNDLED_RESOURCE)) {
+                if (in == null) {
+                    throw new IllegalStateException("the default model " + BUNDLED_RESOURCE
+                            + " is missing from the classpath; rebuild the models module (see DEVELOPERS.md)");
+                }
+                return ModelFile.read(in, "classpath:" + BUNDLED_RESOURCE);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+    }
+}
