@@ -1,0 +1,210 @@
+package dev.tether.candidates;
+
+import org.junit.jupiter.api.Test;
+
+import java.util.List;
+import java.util.Random;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+/** Worked examples on hand-tagged sentences (Penn Treebank tags), each checkable against the rules by hand. */
+class HeadCandidateProposerTest {
+    private final HeadCandidateProposer proposer = new HeadCandidateProposer();
+
+    /** Splits "word/TAG word/TAG ..." into words and tags. */
+    private static String[][] tagged(String s) {
+        String[] parts = s.split(" ");
+        String[] words = new String[parts.length];
+        String[] tags = new String[parts.length];
+        for (int i = 0; i < parts.length; i++) {
+            int slash = parts[i].lastIndexOf('/');
+            words[i] = parts[i].substring(0, slash);
+            tags[i] = parts[i].substring(slash + 1);
+        }
+        return new String[][]{words, tags};
+    }
+
+    private List<PrepositionCandidates> all(String s) {
+        String[][] wt = tagged(s);
+        return proposer.proposeAll(wt[0], wt[1]);
+    }
+
+    private static final String REPLACED = "Replaced/VBD the/DT impeller/NN on/IN the/DT starboard/NN pump/NN with/IN "
+            + "a/DT spare/NN from/IN the/DT Harbourside/NNP stores/NNS ./.";
+
+    @Test
+    void classicQuadrupleNounBeforeThePrepositionAndItsVerb() {
+        List<PrepositionCandidates> c = all(REPLACED);
+        assertEquals(3, c.size(), "on, with, from");
+        PrepositionCandidates on = c.get(0);
+        assertEquals(3, on.preposition());
+        assertEquals(6, on.object(), "the object is the last noun of 'starboard pump'");
+        assertEquals(new PrepositionCandidates(3, 6, new int[]{2, 0}, new HeadClass[]{HeadClass.NOUN, HeadClass.VERB}, 0, 2), on);
+        assertTrue(on.isQuadruple());
+    }
+
+    @Test
+    void laterPhrasesSeeEveryEarlierHeadNearestFirst() {
+        List<PrepositionCandidates> c = all(REPLACED);
+        PrepositionCandidates with = c.get(1);
+        assertEquals(9, with.object());
+        assertArrayEquals(new int[]{6, 2, 0}, heads(with), "pump, impeller, Replaced; 'starboard' is inside a noun run");
+        assertFalse(with.isQuadruple(), "a preposition stands between the verb and 'pump'");
+        PrepositionCandidates from = c.get(2);
+        assertEquals(13, from.object(), "'Harbourside stores' ends in 'stores'");
+        assertArrayEquals(new int[]{9, 6, 2, 0}, heads(from));
+    }
+
+    @Test
+    void frontedPhraseGetsTheMainVerbThatFollows() {
+        PrepositionCandidates in = all("In/IN the/DT morning/NN ,/, the/DT crew/NN had/VBD already/RB checked/VBN the/DT seals/NNS ./.").get(0);
+        assertEquals(2, in.object());
+        assertArrayEquals(new int[]{8}, heads(in), "the main verb of 'had already checked'");
+        assertEquals(HeadClass.VERB, in.headClass(0));
+    }
+
+    @Test
+    void frontedPhraseBeforeBeGetsThePredicateToo() {
+        PrepositionCandidates in = all("In/IN winter/NN the/DT ferry/NN is/VBZ slow/JJ ./.").get(0);
+        assertArrayEquals(new int[]{4, 5}, heads(in));
+        assertEquals(HeadClass.ADJECTIVE, in.headClass(1));
+    }
+
+    @Test
+    void phraseOpeningAClauseAlsoGetsTheFollowingVerb() {
+        PrepositionCandidates c = all("The/DT mate/NN said/VBD that/IN ,/, in/IN heavy/JJ seas/NNS ,/, the/DT hatch/NN leaks/VBZ ./.").get(0);
+        assertEquals(5, c.preposition());
+        assertArrayEquals(new int[]{2, 1, 11}, heads(c), "said, mate, and leaks after the comma-led phrase");
+    }
+
+    @Test
+    void subordinatorsAndInfinitivalToAreNotPrepositions() {
+        assertTrue(all("She/PRP said/VBD that/IN the/DT valve/NN leaked/VBD").isEmpty());
+        assertTrue(all("We/PRP went/VBD to/TO inspect/VB the/DT hull/NN").isEmpty());
+        assertTrue(all("We/PRP stopped/VBD because/IN the/DT valve/NN leaked/VBD").isEmpty());
+        List<PrepositionCandidates> c = all("We/PRP stopped/VBD because/IN of/IN the/DT storm/NN");
+        assertEquals(2, c.get(0).preposition(), "'because of' is a preposition");
+        assertEquals(5, c.get(0).object());
+    }
+
+    @Test
+    void prepositionalToHasAnObject() {
+        PrepositionCandidates to = all("We/PRP sent/VBD the/DT pump/NN to/TO the/DT workshop/NN").get(0);
+        assertEquals(6, to.object());
+        assertArrayEquals(new int[]{3, 1, 0}, heads(to));
+        assertEquals(1, to.quadrupleVerb());
+        assertEquals(3, to.quadrupleNoun());
+    }
+
+    @Test
+    void pronounsNumbersAndStandAloneWordsAsObjectsAndHeads() {
+        PrepositionCandidates c = all("One/CD of/IN them/PRP failed/VBD").get(0);
+        assertEquals(2, c.object());
+        assertArrayEquals(new int[]{0, 3}, heads(c),
+                "a number standing alone takes the phrase; no verb precedes it, so the following 'failed' is proposed");
+        PrepositionCandidates own = all("She/PRP sailed/VBD on/IN her/PRP$ own/JJ ./.").get(0);
+        assertEquals(4, own.object(), "a stand-alone adjective closes the phrase");
+        PrepositionCandidates far = all("It/PRP is/VBZ better/JJR by/IN far/RB ./.").get(0);
+        assertEquals(4, far.object());
+        assertArrayEquals(new int[]{2, 1, 0}, heads(far), "adjective, verb, pronoun");
+        assertEquals(HeadClass.ADJECTIVE, far.headClass(0));
+    }
+
+    @Test
+    void prenominalAdjectivesAndNonFinalNounsAreNotCandidatesButAFirstProperNounIs() {
+        PrepositionCandidates c = all("Captain/NNP Ida/NNP Marsh/NNP of/IN the/DT Brackwater/NNP Line/NNP inspected/VBD "
+                + "the/DT old/JJ brass/NN gear/NN on/IN deck/NN").get(1);
+        assertEquals(12, c.preposition());
+        assertArrayEquals(new int[]{11, 7, 6, 5, 2, 0}, heads(c),
+                "gear, inspected, Line and Brackwater (last and first word of a name), Marsh and Captain; not old, brass, Ida");
+        assertEquals(7, c.quadrupleVerb());
+        assertEquals(11, c.quadrupleNoun());
+    }
+
+    @Test
+    void nearestCandidatesAreBoundedInNumber() {
+        String s = "Keep/VB oil/NN ,/, rags/NNS ,/, rope/NN ,/, paint/NN ,/, tape/NN ,/, fuses/NNS ,/, bulbs/NNS ,/, "
+                + "and/CC filters/NNS in/IN the/DT locker/NN";
+        PrepositionCandidates c = all(s).get(0);
+        assertEquals(HeadCandidateProposer.MAX_PRECEDING, c.size());
+        assertEquals(16, c.head(0), "filters is the nearest");
+        assertEquals(-1, c.indexOf(0), "the verb is beyond the bound");
+        assertFalse(c.isQuadruple(), "a coordinator, not a verb, precedes 'filters'");
+    }
+
+    @Test
+    void participleInsideTheNounPhraseIsNotTheQuadrupleVerb() {
+        PrepositionCandidates c = all("They/PRP found/VBD the/DT broken/VBN seal/NN in/IN the/DT bilge/NN").get(0);
+        assertEquals(1, c.quadrupleVerb());
+        assertEquals(4, c.quadrupleNoun());
+    }
+
+    @Test
+    void proposingOnePrepositionAgreesWithProposingAll() {
+        String[] tagset = {"NN", "NNS", "NNP", "VB", "VBD", "VBN", "VBG", "VBZ", "IN", "IN", "IN", "TO", "DT", "JJ",
+                "RB", "PRP", "PRP$", "CD", "CC", ",", ".", "WDT", "WP", "MD", "POS", "ADD"};
+        String[] wordset = {"the", "of", "that", "to", "is", "far", "own", "John", "because", "out"};
+        Random random = new Random(7);
+        int n = 3000;
+        String[] words = new String[n];
+        String[] tags = new String[n];
+        for (int i = 0; i < n; i++) {
+            tags[i] = tagset[random.nextInt(tagset.length)];
+            words[i] = wordset[random.nextInt(wordset.length)];
+        }
+        List<PrepositionCandidates> all = proposer.proposeAll(words, tags);
+        assertFalse(all.isEmpty());
+        int next = 0;
+        for (int i = 0; i < n; i++) {
+            PrepositionCandidates one = proposer.propose(words, tags, i);
+            if (next < all.size() && all.get(next).preposition() == i) {
+                assertEquals(all.get(next++), one, "token " + i);
+            } else {
+                assertNull(one, "token " + i);
+            }
+        }
+        assertEquals(all.size(), next);
+    }
+
+    @Test
+    void aVeryLongSentenceWithoutPunctuationGivesBoundedCandidateSets() {
+        int n = 50_000;
+        String[] words = new String[n];
+        String[] tags = new String[n];
+        for (int i = 0; i < n; i++) {
+            switch (i % 5) {
+                case 0 -> { words[i] = "checked"; tags[i] = "VBD"; }
+                case 1 -> { words[i] = "the"; tags[i] = "DT"; }
+                case 2 -> { words[i] = "valve"; tags[i] = "NN"; }
+                case 3 -> { words[i] = "on"; tags[i] = "IN"; }
+                default -> { words[i] = "deck"; tags[i] = "NN"; }
+            }
+        }
+        List<PrepositionCandidates> all = proposer.proposeAll(words, tags);
+        assertEquals(n / 5, all.size());
+        for (PrepositionCandidates c : all) {
+            assertTrue(c.size() <= HeadCandidateProposer.MAX_PRECEDING + 2, c.toString());
+            assertEquals(c.preposition() - 1, c.quadrupleNoun());
+        }
+        String[] nouns = new String[n];
+        String[] nounTags = new String[n];
+        java.util.Arrays.fill(nouns, "valve");
+        java.util.Arrays.fill(nounTags, "NN");
+        nouns[0] = "on";
+        nounTags[0] = "IN";
+        PrepositionCandidates longRun = proposer.proposeAll(nouns, nounTags).get(0);
+        assertEquals(HeadCandidateProposer.MAX_RUN + 1, longRun.object(), "a noun run is followed a bounded distance");
+    }
+
+    @Test
+    void tagsAndWordsMustPair() {
+        assertThrows(IllegalArgumentException.class, () -> proposer.proposeAll(new String[]{"a"}, new String[0]));
+        assertThrows(IndexOutOfBoundsException.class, () -> proposer.propose(new String[]{"a"}, new String[]{"DT"}, 3));
+    }
+
+    private static int[] heads(PrepositionCandidates c) {
+        int[] h = new int[c.size()];
+        for (int i = 0; i < h.length; i++) h[i] = c.head(i);
+        return h;
+    }
+}
