@@ -1,5 +1,6 @@
 package dev.tether.model;
 
+import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.Sha256;
 
@@ -37,7 +38,8 @@ import java.util.zip.InflaterInputStream;
  *   payload                   deflate-compressed sections: count, then per section its name, length and bytes
  *   SHA-256                   32 bytes over everything before it
  * </pre>
- * Sections are {@code info} (normalizer version and sources) and {@code quadruples} (the quadruple counts); a reader
+ * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts) and
+ * {@code head-choice} (the counts for choosing among all candidate heads); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -47,13 +49,14 @@ public final class ModelFile {
     private static final int DIGEST_BYTES = 32;
     private static final String INFO = "info";
     private static final String QUADRUPLES = "quadruples";
+    private static final String HEAD_CHOICE = "head-choice";
 
     private ModelFile() {
     }
 
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
-        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples());
+        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
         Path folder = target.toAbsolutePath().getParent();
         if (folder != null) Files.createDirectories(folder);
         if (Files.isDirectory(target)) {
@@ -99,7 +102,8 @@ public final class ModelFile {
         return decode(in.readAllBytes(), name);
     }
 
-    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples) throws IOException {
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -113,6 +117,7 @@ public final class ModelFile {
             }
         }));
         sections.put(QUADRUPLES, section(quadruples::write));
+        sections.put(HEAD_CHOICE, section(headChoice::write));
 
         ByteArrayOutputStream payload = new ByteArrayOutputStream();
         Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);
@@ -172,8 +177,9 @@ public final class ModelFile {
             Map<String, byte[]> sections = sections(bytes, header, (int) payloadLength);
             byte[] info = sections.get(INFO);
             byte[] quads = sections.get(QUADRUPLES);
-            if (info == null || quads == null) {
-                throw new ModelFormatException(name + " lacks the sections 'info' and 'quadruples'; retrain it with 'tether train'");
+            byte[] heads = sections.get(HEAD_CHOICE);
+            if (info == null || quads == null || heads == null) {
+                throw new ModelFormatException(name + " lacks one of the sections 'info', 'quadruples', 'head-choice'; retrain it with 'tether train'");
             }
             DataInputStream in = new DataInputStream(new ByteArrayInputStream(info));
             String normalizer = in.readUTF();
@@ -183,7 +189,8 @@ public final class ModelFile {
                 sources.add(new ModelSource(in.readUTF(), in.readUTF(), in.readLong(), in.readLong(), in.readUTF()));
             }
             QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
-            return new TetherModel(normalizer, sources, counts, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+            HeadChoiceCounts headChoice = HeadChoiceCounts.read(new DataInputStream(new ByteArrayInputStream(heads)));
+            return new TetherModel(normalizer, sources, counts, headChoice, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (IOException | RuntimeException e) {
             throw new ModelFormatException(name + " is damaged: its content cannot be read (" + e.getMessage()
                     + "); copy or train it again", e);

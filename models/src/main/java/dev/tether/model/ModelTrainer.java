@@ -1,6 +1,13 @@
 package dev.tether.model;
 
+import dev.tether.attachment.AttachmentExample;
+import dev.tether.attachment.AttachmentQuery;
+import dev.tether.attachment.CandidateStructure;
+import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.attachment.LabelledQuadruple;
+import dev.tether.candidates.HeadClass;
+import dev.tether.counts.HeadChoiceCounts;
+import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.attachment.Quadruple;
 import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
@@ -20,6 +27,7 @@ import java.util.List;
 public final class ModelTrainer {
     private final WordNormalizer normalizer = new WordNormalizer();
     private final QuadrupleCountsBuilder quadruples = new QuadrupleCountsBuilder();
+    private final HeadChoiceCountsBuilder headChoice = new HeadChoiceCountsBuilder();
     private final List<ModelSource> sources = new ArrayList<>();
 
     /** Counts every quadruple of {@code set}. */
@@ -29,11 +37,38 @@ public final class ModelTrainer {
         return this;
     }
 
-    /** Counts one labelled quadruple (normalized here). */
+    /**
+     * Counts one labelled quadruple (normalized here): into the quadruple counts, and into the lexical head-choice
+     * counts as a choice between two candidates, the verb and the first noun. It adds nothing to the structural
+     * counts, since a bare quadruple says nothing about positions in a sentence.
+     */
     public void addQuadruple(LabelledQuadruple lq) {
         Quadruple q = lq.quadruple();
-        quadruples.add(normalizer.verb(q.verb()), normalizer.noun(q.noun1()), normalizer.preposition(q.preposition()),
-                normalizer.noun(q.noun2()), lq.site(), 1.0);
+        String v = normalizer.verb(q.verb());
+        String n1 = normalizer.noun(q.noun1());
+        String p = normalizer.preposition(q.preposition());
+        String n2 = normalizer.noun(q.noun2());
+        quadruples.add(v, n1, p, n2, lq.site(), 1.0);
+        headChoice.addLexical(p, v, HeadClass.VERB.ordinal(), n2, lq.site() == dev.tether.attachment.AttachmentSite.VERB, 1.0);
+        headChoice.addLexical(p, n1, HeadClass.NOUN.ordinal(), n2, lq.site() == dev.tether.attachment.AttachmentSite.NOUN, 1.0);
+    }
+
+    /**
+     * Counts one head-choice example: every candidate is a trial of its lexical and structural keys, the gold one a
+     * hit. An example whose gold head is not among its candidates teaches nothing and is not counted.
+     */
+    public void addExample(AttachmentExample example) {
+        if (example.gold() < 0) return;
+        AttachmentQuery q = example.query();
+        String p = normalizer.preposition(q.preposition());
+        String o = normalizer.noun(q.object());
+        long[] structure = CandidateStructure.keys(q);
+        for (int i = 0; i < q.size(); i++) {
+            HeadClass c = q.headClass(i);
+            boolean hit = i == example.gold();
+            headChoice.addLexical(p, HeadChoiceScorer.headKey(normalizer, q.head(i), c), c.ordinal(), o, hit, 1.0);
+            headChoice.addStructure(structure[i], hit, 1.0);
+        }
     }
 
     /** Adds the counts of an existing model (for example the shipped default) to what is counted here. */
@@ -43,6 +78,7 @@ public final class ModelTrainer {
                     + ", this build uses " + WordNormalizer.VERSION + "; retrain it from its sources");
         }
         quadruples.addAll(model.quadruples());
+        headChoice.addAll(model.headChoice());
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
         return this;
     }
@@ -54,9 +90,10 @@ public final class ModelTrainer {
 
     public TetherModel build() {
         QuadrupleCounts counts = quadruples.build();
+        HeadChoiceCounts heads = headChoice.build();
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, ModelFile.fingerprint(encoded));
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }

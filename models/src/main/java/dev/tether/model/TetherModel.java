@@ -1,5 +1,7 @@
 package dev.tether.model;
 
+import dev.tether.attachment.HeadChoiceScorer;
+import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.vocabulary.WordNormalizer;
 
@@ -16,22 +18,34 @@ public final class TetherModel {
     /** Classpath location of the shipped default model. */
     public static final String BUNDLED_RESOURCE = "/dev/tether/model/default.tether";
 
+    /** Weights of the head-choice score's class and word factors (see {@link HeadChoiceScorer}); tuned on dev data. */
+    static final double CLASS_WEIGHT = 1.0;
+    static final double WORD_WEIGHT = 1.0;
+
     private final String normalizerVersion;
     private final List<ModelSource> sources;
     private final QuadrupleCounts quadruples;
+    private final HeadChoiceCounts headChoice;
     private final String id;
     private final WordNormalizer normalizer = new WordNormalizer();
+    private final HeadChoiceScorer headChoiceScorer;
 
-    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples, String id) {
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                HeadChoiceCounts headChoice, String id) {
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
+        this.headChoice = headChoice;
         this.id = id;
+        this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
     }
 
     public String normalizerVersion() { return normalizerVersion; }
     public List<ModelSource> sources() { return sources; }
     public QuadrupleCounts quadruples() { return quadruples; }
+    public HeadChoiceCounts headChoice() { return headChoice; }
+    /** The scorer that chooses among all candidate heads, built once with the model. */
+    public HeadChoiceScorer headChoiceScorer() { return headChoiceScorer; }
     public WordNormalizer normalizer() { return normalizer; }
 
     /** A short fingerprint of the model's content (the start of its checksum), recorded with every decision. */
