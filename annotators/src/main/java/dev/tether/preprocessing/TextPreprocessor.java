@@ -1,0 +1,146 @@
+package dev.tether.preprocessing;
+
+import java.io.IOException;
+
+import org.apache.uima.UimaContext;
+import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
+import org.apache.uima.fit.component.JCasAnnotator_ImplBase;
+import org.apache.uima.fit.descriptor.ConfigurationParameter;
+import org.apache.uima.fit.descriptor.ResourceMetaData;
+import org.apache.uima.fit.descriptor.TypeCapability;
+import org.apache.uima.jcas.JCas;
+import org.apache.uima.resource.ResourceInitializationException;
+import org.apache.uima.util.Level;
+
+import dev.tether.type.Chunk;
+import dev.tether.type.Sentence;
+import dev.tether.type.Token;
+import opennlp.tools.chunker.ChunkerME;
+import opennlp.tools.postag.POSTagFormat;
+import opennlp.tools.postag.POSTaggerME;
+import opennlp.tools.sentdetect.SentenceDetectorME;
+import opennlp.tools.tokenize.TokenizerME;
+import opennlp.tools.util.Span;
+
+/**
+ * Built-in preprocessing for raw text: sentences, tokens with Penn Treebank part-of-speech tags, and base chunks,
+ * written as {@link Sentence}, {@link Token} and {@link Chunk}. Uses the English OpenNLP models shared by the
+ * process ({@link EnglishPreprocessingModels}); the OpenNLP tools themselves belong to this engine instance.
+ *
+ * <p><b>Over-long sentences.</b> OpenNLP's taggers search a beam over the whole sequence they are given, and their
+ * cost grows faster than the sentence length. A stretch of text without sentence punctuation (a table dump, a
+ * 50,000-word log line) is therefore cut into consecutive windows of at most {@link #PARAM_MAX_SENTENCE_TOKENS}
+ * tokens; each window is tagged, chunked and written as its own {@link Sentence}, and a warning is logged. No text
+ * is dropped. Empty and blank documents produce no annotations.
+ */
+@ResourceMetaData(name = "Tether text preprocessor",
+        description = "Sentences, Penn Treebank tagged tokens and chunks from raw English text (OpenNLP).")
+@TypeCapability(outputs = {"dev.tether.type.Sentence", "dev.tether.type.Token", "dev.tether.type.Token:pos",
+        "dev.tether.type.Chunk", "dev.tether.type.Chunk:label"})
+public class TextPreprocessor extends JCasAnnotator_ImplBase {
+
+    /**
+     * Largest number of tokens tagged as one sequence. A longer sentence is written as several consecutive
+     * {@link Sentence} annotations of at most this many tokens each, with a warning. Edited English sentences rarely
+     * exceed 100 tokens (common practice), so the default of 300 only affects text without sentence punctuation.
+     */
+    public static final String PARAM_MAX_SENTENCE_TOKENS = "maxSentenceTokens";
+    @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
+    private int maxSentenceTokens;
+
+    private SentenceDetectorME sentenceDetector;
+    private TokenizerME tokenizer;
+    private POSTaggerME tagger;
+    private ChunkerME chunker;
+
+    private long documents;
+    private long sentencesWritten;
+    private long tokensWritten;
+    private long sentencesSplit;
+
+    @Override
+    public void initialize(UimaContext context) throws ResourceInitializationException {
+        super.initialize(context);
+        if (maxSentenceTokens < 1) {
+            throw new ResourceInitializationException(new IllegalArgumentException(
+                    "Parameter " + PARAM_MAX_SENTENCE_TOKENS + " of " + getClass().getSimpleName()
+                            + " must be at least 1, was " + maxSentenceTokens));
+        }
+        EnglishPreprocessingModels models;
+        try {
+            models = EnglishPreprocessingModels.shared();
+        } catch (IOException e) {
+            throw new ResourceInitializationException(e);
+        }
+        sentenceDetector = new SentenceDetectorME(models.sentenceModel());
+        tokenizer = new TokenizerME(models.tokenizerModel());
+        // PENN: keep the model's own Penn Treebank tags. The default maps them to Universal Dependencies tags, which
+        // the 1.5 chunker model was not trained on.
+        tagger = new POSTaggerME(models.posModel(), POSTagFormat.PENN);
+        chunker = new ChunkerME(models.chunkerModel());
+    }
+
+    @Override
+    public void process(JCas jcas) throws AnalysisEngineProcessException {
+        documents++;
+        String text = jcas.getDocumentText();
+        if (text == null || text.isBlank()) {
+            return;
+        }
+        for (Span sentence : sentenceDetector.sentPosDetect(text)) {
+            String sentenceText = sentence.getCoveredText(text).toString();
+            Span[] tokens = tokenizer.tokenizePos(sentenceText);
+            if (tokens.length == 0) {
+                continue;
+            }
+            int offset = sentence.getStart();
+            if (tokens.length > maxSentenceTokens) {
+                sentencesSplit++;
+                int windows = (tokens.length + maxSentenceTokens - 1) / maxSentenceTokens;
+                getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getStart() + "-"
+                        + sentence.getEnd() + " has " + tokens.length + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS
+                        + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
+                        + " consecutive sentences of at most " + maxSentenceTokens + " tokens");
+            }
+            for (int start = 0; start < tokens.length; start += maxSentenceTokens) {
+                int end = Math.min(tokens.length, start + maxSentenceTokens);
+                annotateWindow(jcas, sentenceText, offset, tokens, start, end);
+            }
+        }
+    }
+
+    /** Tags, chunks and writes tokens {@code [start, end)} of one sentence as one {@link Sentence}. */
+    private void annotateWindow(JCas jcas, String sentenceText, int offset, Span[] tokens, int start, int end) {
+        int n = end - start;
+        String[] words = new String[n];
+        Token[] written = new Token[n];
+        for (int i = 0; i < n; i++) {
+            words[i] = tokens[start + i].getCoveredText(sentenceText).toString();
+        }
+        String[] tags = tagger.tag(words);
+        for (int i = 0; i < n; i++) {
+            Span span = tokens[start + i];
+            Token token = new Token(jcas, offset + span.getStart(), offset + span.getEnd());
+            token.setPos(tags[i]);
+            token.addToIndexes();
+            written[i] = token;
+        }
+        for (Span chunkSpan : chunker.chunkAsSpans(words, tags)) {
+            Chunk chunk = new Chunk(jcas, written[chunkSpan.getStart()].getBegin(),
+                    written[chunkSpan.getEnd() - 1].getEnd());
+            chunk.setLabel(chunkSpan.getType());
+            chunk.addToIndexes();
+        }
+        new Sentence(jcas, written[0].getBegin(), written[n - 1].getEnd()).addToIndexes();
+        sentencesWritten++;
+        tokensWritten += n;
+    }
+
+    @Override
+    public void collectionProcessComplete() throws AnalysisEngineProcessException {
+        super.collectionProcessComplete();
+        getLogger().log(Level.INFO, "Preprocessed " + documents + " documents: " + sentencesWritten + " sentences, "
+                + tokensWritten + " tokens; " + sentencesSplit + " over-long sentences split into windows of "
+                + maxSentenceTokens + " tokens");
+    }
+}

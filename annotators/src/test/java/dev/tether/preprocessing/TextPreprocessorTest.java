@@ -1,0 +1,128 @@
+package dev.tether.preprocessing;
+
+import static org.apache.uima.fit.factory.AnalysisEngineFactory.createEngine;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
+
+import org.apache.uima.analysis_engine.AnalysisEngine;
+import org.apache.uima.fit.util.JCasUtil;
+import org.apache.uima.jcas.JCas;
+import org.apache.uima.resource.ResourceInitializationException;
+import org.junit.jupiter.api.Test;
+
+import dev.tether.type.Chunk;
+import dev.tether.type.Sentence;
+import dev.tether.type.Token;
+
+/** Built-in preprocessing on invented maintenance-log text of a fictional ferry operator. */
+class TextPreprocessorTest {
+
+    /**
+     * The 45 tags of the Penn Treebank tag set (Marcus, Santorini and Marcinkiewicz 1993, table 2), which the
+     * OpenNLP 1.5 English models emit. Universal Dependencies tags (NOUN, VERB, ADP...) are not among them.
+     */
+    static final Set<String> PENN_TREEBANK_TAGS = Set.of("CC", "CD", "DT", "EX", "FW", "IN", "JJ", "JJR", "JJS",
+            "LS", "MD", "NN", "NNS", "NNP", "NNPS", "PDT", "POS", "PRP", "PRP$", "RB", "RBR", "RBS", "RP", "SYM", "TO",
+            "UH", "VB", "VBD", "VBG", "VBN", "VBP", "VBZ", "WDT", "WP", "WP$", "WRB", "#", "$", ".", ",", ":", "(", ")",
+            "``", "''", "-LRB-", "-RRB-");
+
+    @Test
+    void writesSentencesPennTaggedTokensAndChunks() throws Exception {
+        AnalysisEngine preprocessor = createEngine(TextPreprocessor.class);
+        JCas jcas = preprocessor.newJCas();
+        jcas.setDocumentText("The engineer replaced the gasket on the port engine with a spare from the stores. "
+                + "The deckhand checked the bilge pump before departure.");
+
+        preprocessor.process(jcas);
+
+        List<Sentence> sentences = new ArrayList<>(JCasUtil.select(jcas, Sentence.class));
+        assertEquals(2, sentences.size());
+        assertEquals("The deckhand checked the bilge pump before departure.", sentences.get(1).getCoveredText());
+
+        List<Token> first = JCasUtil.selectCovered(Token.class, sentences.get(0));
+        assertEquals(List.of("The", "engineer", "replaced", "the", "gasket", "on", "the", "port", "engine", "with",
+                "a", "spare", "from", "the", "stores", "."), first.stream().map(Token::getCoveredText).toList());
+        for (Token token : JCasUtil.select(jcas, Token.class)) {
+            assertTrue(PENN_TREEBANK_TAGS.contains(token.getPos()),
+                    "Penn Treebank tag for '" + token.getCoveredText() + "': " + token.getPos());
+        }
+        Map<String, String> tagOf = first.stream()
+                .collect(Collectors.toMap(Token::getCoveredText, Token::getPos, (a, b) -> a));
+        // Unambiguous words of the sentence, tagged as in the Penn Treebank guidelines (Santorini 1990).
+        assertEquals("VBD", tagOf.get("replaced"));
+        assertEquals("IN", tagOf.get("on"));
+        assertEquals("IN", tagOf.get("with"));
+        assertEquals("NN", tagOf.get("gasket"));
+        assertEquals("NNS", tagOf.get("stores"));
+
+        List<String> chunks = JCasUtil.selectCovered(Chunk.class, sentences.get(0)).stream()
+                .map(c -> c.getLabel() + ":" + c.getCoveredText()).toList();
+        assertTrue(chunks.contains("NP:the gasket"), chunks.toString());
+        assertTrue(chunks.contains("PP:on"), chunks.toString());
+        assertTrue(chunks.contains("VP:replaced"), chunks.toString());
+    }
+
+    @Test
+    void emptyAndBlankDocumentsProduceNothing() throws Exception {
+        AnalysisEngine preprocessor = createEngine(TextPreprocessor.class);
+        for (String text : new String[] {"", " \n\t  \n"}) {
+            JCas jcas = preprocessor.newJCas();
+            jcas.setDocumentText(text);
+            preprocessor.process(jcas);
+            assertTrue(JCasUtil.select(jcas, Sentence.class).isEmpty());
+            assertTrue(JCasUtil.select(jcas, Token.class).isEmpty());
+            assertTrue(JCasUtil.select(jcas, Chunk.class).isEmpty());
+        }
+    }
+
+    @Test
+    void fiftyThousandTokensWithoutPunctuationAreTaggedInBoundedWindows() throws Exception {
+        String[] words = {"crew", "checked", "the", "valve", "on", "deck", "with", "a", "wrench", "near", "hull"};
+        StringBuilder text = new StringBuilder();
+        for (int i = 0; i < 50_000; i++) {
+            text.append(words[i % words.length]).append(' ');
+        }
+        int window = 300;
+        AnalysisEngine preprocessor = createEngine(TextPreprocessor.class,
+                TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, window);
+        JCas jcas = preprocessor.newJCas();
+        jcas.setDocumentText(text.toString());
+
+        preprocessor.process(jcas);
+
+        assertEquals(50_000, JCasUtil.select(jcas, Token.class).size(), "no token dropped");
+        List<Sentence> sentences = new ArrayList<>(JCasUtil.select(jcas, Sentence.class));
+        assertEquals((50_000 + window - 1) / window, sentences.size());
+        for (Sentence sentence : sentences) {
+            assertTrue(JCasUtil.selectCovered(Token.class, sentence).size() <= window);
+        }
+        for (Chunk chunk : JCasUtil.select(jcas, Chunk.class)) {
+            assertTrue(JCasUtil.selectCovered(Token.class, chunk).size() <= window);
+        }
+    }
+
+    @Test
+    void engineInstancesShareOneSetOfModels() throws Exception {
+        createEngine(TextPreprocessor.class);
+        EnglishPreprocessingModels first = EnglishPreprocessingModels.shared();
+        createEngine(TextPreprocessor.class);
+        assertSame(first, EnglishPreprocessingModels.shared());
+    }
+
+    @Test
+    void windowOfNoTokensIsRejectedNamingTheParameter() {
+        ResourceInitializationException e = assertThrows(ResourceInitializationException.class,
+                () -> createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, 0));
+        StringBuilder messages = new StringBuilder();
+        for (Throwable t = e; t != null; t = t.getCause()) messages.append(t.getMessage());
+        assertTrue(messages.toString().contains(TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS), messages.toString());
+    }
+}
