@@ -1,0 +1,260 @@
+package dev.tether.candidates;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.apache.uima.UimaContext;
+import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
+import org.apache.uima.cas.CAS;
+import org.apache.uima.cas.CASException;
+import org.apache.uima.cas.TypeSystem;
+import org.apache.uima.cas.text.AnnotationFS;
+import org.apache.uima.fit.component.CasAnnotator_ImplBase;
+import org.apache.uima.fit.descriptor.ConfigurationParameter;
+import org.apache.uima.fit.descriptor.ResourceMetaData;
+import org.apache.uima.fit.descriptor.TypeCapability;
+import org.apache.uima.fit.util.CasUtil;
+import org.apache.uima.jcas.JCas;
+import org.apache.uima.jcas.cas.FSArray;
+import org.apache.uima.jcas.cas.IntegerArray;
+import org.apache.uima.jcas.cas.StringArray;
+import org.apache.uima.jcas.tcas.Annotation;
+import org.apache.uima.resource.ResourceInitializationException;
+import org.apache.uima.util.Level;
+
+import dev.tether.type.AttachmentAmbiguity;
+import dev.tether.type.QuadrupleCandidate;
+
+/**
+ * Finds every preposition with a nominal object and proposes all its plausible attachment sites (verbs, nouns,
+ * adjectives and adverbs, nearest first), writing one {@link AttachmentAmbiguity} per preposition and a
+ * {@link QuadrupleCandidate} where the classic verb–noun–preposition–noun configuration holds. The proposals come
+ * from {@link HeadCandidateProposer}, the same code that treebank training uses, so training and use see the same
+ * candidate sets.
+ *
+ * <p><b>Host types.</b> Sentences, tokens and tags are read from Tether's own types (written by the built-in
+ * preprocessing) or from the host pipeline's types, named by {@link #PARAM_SENTENCE_TYPE}, {@link #PARAM_TOKEN_TYPE}
+ * and {@link #PARAM_POS_FEATURE_PATH}; see {@link HostTypeMapping}. The annotations written point at the host's own
+ * token annotations. Tags are expected from the Penn Treebank tag set (Marcus et al. 1993).
+ *
+ * <p><b>Missing input.</b> A configured type or feature that the type system lacks fails when the type system is
+ * first seen; a document with text but no sentences, no tokens, or no tags fails with an error naming the type and
+ * the parameter. Tokens without a tag in an otherwise tagged document are analysed as untagged and counted in a
+ * warning.
+ *
+ * <p><b>Bounded work.</b> A sentence longer than {@link #PARAM_MAX_SENTENCE_TOKENS} tokens is analysed in
+ * consecutive windows of that many tokens (no head is proposed across a window boundary) and a warning is logged,
+ * so the number of candidates per preposition never exceeds the window length.
+ */
+@ResourceMetaData(name = "Tether attachment candidate finder",
+        description = "Prepositions with their objects and every plausible attachment site; verb-noun-preposition-noun quadruples.")
+@TypeCapability(outputs = {"dev.tether.type.AttachmentAmbiguity", "dev.tether.type.QuadrupleCandidate"})
+public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
+
+    /** Full name of the sentence annotation type to read. Default: Tether's own sentence type. */
+    public static final String PARAM_SENTENCE_TYPE = "sentenceType";
+    @ConfigurationParameter(name = PARAM_SENTENCE_TYPE, mandatory = true, defaultValue = "dev.tether.type.Sentence")
+    private String sentenceTypeName;
+
+    /** Full name of the token annotation type to read. Default: Tether's own token type. */
+    public static final String PARAM_TOKEN_TYPE = "tokenType";
+    @ConfigurationParameter(name = PARAM_TOKEN_TYPE, mandatory = true, defaultValue = "dev.tether.type.Token")
+    private String tokenTypeName;
+
+    /**
+     * Feature path from the token to its Penn Treebank tag: a string feature of the token ({@code pos}, the default,
+     * for Tether's own token type) or features separated by {@code /} ending in a string feature ({@code posTag/value}
+     * when the token references a separate part-of-speech annotation).
+     */
+    public static final String PARAM_POS_FEATURE_PATH = "posFeaturePath";
+    @ConfigurationParameter(name = PARAM_POS_FEATURE_PATH, mandatory = true, defaultValue = "pos")
+    private String posFeaturePath;
+
+    /**
+     * Largest number of tokens analysed as one unit. A longer sentence is analysed in consecutive windows of this many
+     * tokens, heads are not proposed across a window boundary, and a warning is logged. Edited English sentences
+     * rarely exceed 100 tokens (common practice), so the default of 300 only affects text without sentence
+     * punctuation.
+     */
+    public static final String PARAM_MAX_SENTENCE_TOKENS = "maxSentenceTokens";
+    @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
+    private int maxSentenceTokens;
+
+    private final HeadCandidateProposer proposer = new HeadCandidateProposer();
+    private HostTypeMapping types;
+
+    private long documents;
+    private long sentences;
+    private long sentencesCut;
+    private long ambiguities;
+    private long quadruples;
+
+    @Override
+    public void initialize(UimaContext context) throws ResourceInitializationException {
+        super.initialize(context);
+        if (maxSentenceTokens < 2) {
+            throw new ResourceInitializationException(new IllegalArgumentException("Parameter "
+                    + PARAM_MAX_SENTENCE_TOKENS + " of " + getClass().getSimpleName()
+                    + " must be at least 2 (a preposition and its object), was " + maxSentenceTokens));
+        }
+    }
+
+    @Override
+    public void typeSystemInit(TypeSystem typeSystem) throws AnalysisEngineProcessException {
+        super.typeSystemInit(typeSystem);
+        try {
+            types = HostTypeMapping.resolve(typeSystem, sentenceTypeName, PARAM_SENTENCE_TYPE,
+                    tokenTypeName, PARAM_TOKEN_TYPE, posFeaturePath, PARAM_POS_FEATURE_PATH);
+        } catch (IllegalArgumentException e) {
+            throw new AnalysisEngineProcessException(new IllegalArgumentException(
+                    getClass().getSimpleName() + ": " + e.getMessage(), e));
+        }
+    }
+
+    @Override
+    public void process(CAS cas) throws AnalysisEngineProcessException {
+        documents++;
+        String text = cas.getDocumentText();
+        if (text == null || text.isBlank()) {
+            return;
+        }
+        JCas jcas;
+        try {
+            jcas = cas.getJCas();
+        } catch (CASException e) {
+            throw new AnalysisEngineProcessException(e);
+        }
+        List<AnnotationFS> sentenceList = new ArrayList<>(CasUtil.select(cas, types.sentenceType()));
+        if (sentenceList.isEmpty()) {
+            throw missingInput(text, "no annotations of the sentence type '" + types.sentenceType().getName()
+                    + "'; run a sentence splitter before this engine or set parameter '" + PARAM_SENTENCE_TYPE
+                    + "' to the type your pipeline writes");
+        }
+        if (cas.getAnnotationIndex(types.tokenType()).size() == 0) {
+            throw missingInput(text, "no annotations of the token type '" + types.tokenType().getName()
+                    + "'; run a tokenizer before this engine or set parameter '" + PARAM_TOKEN_TYPE
+                    + "' to the type your pipeline writes");
+        }
+        if (!anyTokenTagged(cas)) {
+            throw missingInput(text, "no part-of-speech tags: the feature path '" + types.tagPathText()
+                    + "' is empty on every token of type '" + types.tokenType().getName()
+                    + "'; run a part-of-speech tagger before this engine or set parameter '" + PARAM_POS_FEATURE_PATH
+                    + "' to the path that holds the tags");
+        }
+        DocumentTally tally = new DocumentTally();
+        for (AnnotationFS sentence : sentenceList) {
+            List<AnnotationFS> tokens = CasUtil.selectCovered(cas, types.tokenType(), sentence);
+            sentences++;
+            if (tokens.size() > maxSentenceTokens) {
+                sentencesCut++;
+                getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getBegin() + "-"
+                        + sentence.getEnd() + " of " + describe(text) + " has " + tokens.size()
+                        + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS + "=" + maxSentenceTokens
+                        + "; it is analysed in windows of that many tokens and no head is proposed across a window boundary");
+            }
+            for (int start = 0; start < tokens.size(); start += maxSentenceTokens) {
+                analyse(jcas, tokens.subList(start, Math.min(tokens.size(), start + maxSentenceTokens)), tally);
+            }
+        }
+        if (tally.untagged > 0) {
+            getLogger().log(Level.WARNING, tally.untagged + " of " + tally.tokens + " tokens of " + describe(text)
+                    + " have no part-of-speech tag at '" + types.tagPathText() + "' (parameter "
+                    + PARAM_POS_FEATURE_PATH + "); they were analysed as untagged and cannot be heads or objects");
+        }
+    }
+
+    /** Whether at least one token of the document has a tag; stops at the first tagged token. */
+    private boolean anyTokenTagged(CAS cas) {
+        for (AnnotationFS token : cas.getAnnotationIndex(types.tokenType())) {
+            if (types.tagOf(token) != null) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Proposes candidates for one window of tokens and writes the annotations. */
+    private void analyse(JCas jcas, List<AnnotationFS> tokens, DocumentTally tally) {
+        int n = tokens.size();
+        String[] words = new String[n];
+        String[] tags = new String[n];
+        for (int i = 0; i < n; i++) {
+            AnnotationFS token = tokens.get(i);
+            words[i] = token.getCoveredText();
+            String tag = types.tagOf(token);
+            if (tag == null) {
+                tally.untagged++;
+                tag = "";
+            }
+            tags[i] = tag;
+        }
+        tally.tokens += n;
+        for (PrepositionCandidates found : proposer.proposeAll(words, tags)) {
+            write(jcas, tokens, found);
+        }
+    }
+
+    private void write(JCas jcas, List<AnnotationFS> tokens, PrepositionCandidates found) {
+        Annotation preposition = (Annotation) tokens.get(found.preposition());
+        Annotation object = (Annotation) tokens.get(found.object());
+        AttachmentAmbiguity ambiguity = new AttachmentAmbiguity(jcas,
+                Math.min(preposition.getBegin(), object.getBegin()), Math.max(preposition.getEnd(), object.getEnd()));
+        ambiguity.setPreposition(preposition);
+        ambiguity.setObject(object);
+        FSArray<Annotation> candidates = new FSArray<>(jcas, found.size());
+        StringArray classes = new StringArray(jcas, found.size());
+        IntegerArray distances = new IntegerArray(jcas, found.size());
+        for (int i = 0; i < found.size(); i++) {
+            candidates.set(i, (Annotation) tokens.get(found.head(i)));
+            classes.set(i, found.headClass(i).label());
+            distances.set(i, found.preposition() - found.head(i));
+        }
+        ambiguity.setCandidates(candidates);
+        ambiguity.setCandidateClasses(classes);
+        ambiguity.setCandidateDistances(distances);
+        if (found.isQuadruple()) {
+            Annotation verb = (Annotation) tokens.get(found.quadrupleVerb());
+            Annotation noun1 = (Annotation) tokens.get(found.quadrupleNoun());
+            ambiguity.setQuadrupleVerb(verb);
+            ambiguity.setQuadrupleNoun(noun1);
+            QuadrupleCandidate quadruple = new QuadrupleCandidate(jcas,
+                    Math.min(verb.getBegin(), ambiguity.getBegin()), Math.max(noun1.getEnd(), ambiguity.getEnd()));
+            quadruple.setVerb(verb);
+            quadruple.setNoun1(noun1);
+            quadruple.setPreposition(preposition);
+            quadruple.setNoun2(object);
+            quadruple.addToIndexes();
+            quadruples++;
+        }
+        ambiguity.addToIndexes();
+        ambiguities++;
+    }
+
+    private AnalysisEngineProcessException missingInput(String text, String what) {
+        return new AnalysisEngineProcessException(new IllegalStateException(
+                getClass().getSimpleName() + ": " + describe(text) + " has " + what));
+    }
+
+    /** A short label for the document in messages: its length and first words. */
+    private static String describe(String text) {
+        String start = text.strip();
+        if (start.length() > 40) {
+            start = start.substring(0, 40) + "...";
+        }
+        return "the document of " + text.length() + " characters beginning \"" + start.replaceAll("\\s+", " ") + "\"";
+    }
+
+    @Override
+    public void collectionProcessComplete() throws AnalysisEngineProcessException {
+        super.collectionProcessComplete();
+        getLogger().log(Level.INFO, "Candidate finder: " + documents + " documents, " + sentences + " sentences ("
+                + sentencesCut + " analysed in windows of " + maxSentenceTokens + " tokens), " + ambiguities
+                + " attachment ambiguities, " + quadruples + " quadruple candidates");
+    }
+
+    /** Token counts of one document, for the warning about untagged tokens. */
+    private static final class DocumentTally {
+        long tokens;
+        long untagged;
+    }
+}
