@@ -80,6 +80,9 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
     private int maxSentenceTokens;
 
+    /** Resource bundle of this engine's exception messages (UIMA exceptions take their message from a bundle). */
+    private static final String MESSAGES = "dev.tether.candidates.FinderMessages";
+
     private final HeadCandidateProposer proposer = new HeadCandidateProposer();
     private HostTypeMapping types;
 
@@ -93,9 +96,9 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
     public void initialize(UimaContext context) throws ResourceInitializationException {
         super.initialize(context);
         if (maxSentenceTokens < 2) {
-            throw new ResourceInitializationException(new IllegalArgumentException("Parameter "
+            throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {"Parameter "
                     + PARAM_MAX_SENTENCE_TOKENS + " of " + getClass().getSimpleName()
-                    + " must be at least 2 (a preposition and its object), was " + maxSentenceTokens));
+                    + " must be at least 2 (a preposition and its object), was " + maxSentenceTokens});
         }
     }
 
@@ -106,8 +109,8 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
             types = HostTypeMapping.resolve(typeSystem, sentenceTypeName, PARAM_SENTENCE_TYPE,
                     tokenTypeName, PARAM_TOKEN_TYPE, posFeaturePath, PARAM_POS_FEATURE_PATH);
         } catch (IllegalArgumentException e) {
-            throw new AnalysisEngineProcessException(new IllegalArgumentException(
-                    getClass().getSimpleName() + ": " + e.getMessage(), e));
+            throw new AnalysisEngineProcessException(MESSAGES, "problem",
+                    new Object[] {getClass().getSimpleName() + ": " + e.getMessage()}, e);
         }
     }
 
@@ -231,8 +234,8 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
     }
 
     private AnalysisEngineProcessException missingInput(String text, String what) {
-        return new AnalysisEngineProcessException(new IllegalStateException(
-                getClass().getSimpleName() + ": " + describe(text) + " has " + what));
+        return new AnalysisEngineProcessException(MESSAGES, "problem",
+                new Object[] {getClass().getSimpleName() + ": " + describe(text) + " has " + what});
     }
 
     /** A short label for the document in messages: its length and first words. */

@@ -48,6 +48,9 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
     private int maxSentenceTokens;
 
+    /** Resource bundle of this engine's exception messages (UIMA exceptions take their message from a bundle). */
+    private static final String MESSAGES = "dev.tether.preprocessing.PreprocessorMessages";
+
     private SentenceDetectorME sentenceDetector;
     private TokenizerME tokenizer;
     private POSTaggerME tagger;
@@ -62,15 +65,15 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     public void initialize(UimaContext context) throws ResourceInitializationException {
         super.initialize(context);
         if (maxSentenceTokens < 1) {
-            throw new ResourceInitializationException(new IllegalArgumentException(
+            throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {
                     "Parameter " + PARAM_MAX_SENTENCE_TOKENS + " of " + getClass().getSimpleName()
-                            + " must be at least 1, was " + maxSentenceTokens));
+                            + " must be at least 1, was " + maxSentenceTokens});
         }
         EnglishPreprocessingModels models;
         try {
             models = EnglishPreprocessingModels.shared();
         } catch (IOException e) {
-            throw new ResourceInitializationException(e);
+            throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {e.getMessage()}, e);
         }
         sentenceDetector = new SentenceDetectorME(models.sentenceModel());
         tokenizer = new TokenizerME(models.tokenizerModel());

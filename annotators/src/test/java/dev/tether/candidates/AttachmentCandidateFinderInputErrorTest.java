@@ -93,7 +93,7 @@ class AttachmentCandidateFinderInputErrorTest {
     void windowShorterThanAPrepositionAndItsObjectIsRejected() {
         ResourceInitializationException e = assertThrows(ResourceInitializationException.class, () ->
                 createEngine(AttachmentCandidateFinder.class, AttachmentCandidateFinder.PARAM_MAX_SENTENCE_TOKENS, 1));
-        assertMentions(messages(e), AttachmentCandidateFinder.PARAM_MAX_SENTENCE_TOKENS);
+        assertMentions(messages(e), "Parameter " + AttachmentCandidateFinder.PARAM_MAX_SENTENCE_TOKENS, "at least 2");
     }
 
     private static String failureOnHarbourCas(String sentenceType, String tokenType, String tagPath) throws Exception {
@@ -107,10 +107,13 @@ class AttachmentCandidateFinderInputErrorTest {
 
     private static String processFailure(AnalysisEngine engine, JCas jcas) {
         AnalysisEngineProcessException e = assertThrows(AnalysisEngineProcessException.class, () -> engine.process(jcas));
-        return messages(e);
+        return e.getMessage();
     }
 
-    /** The messages of an exception and all its causes, since UIMA wraps the engine's own exception. */
+    /**
+     * The messages of an exception and its causes. UIMA reports an initialization failure as "Initialization of
+     * annotator class ... failed" and keeps the engine's own exception, with its message, as the cause.
+     */
     static String messages(Throwable e) {
         StringBuilder all = new StringBuilder();
         for (Throwable t = e; t != null; t = t.getCause()) {

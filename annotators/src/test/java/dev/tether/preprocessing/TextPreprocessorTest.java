@@ -121,8 +121,10 @@ class TextPreprocessorTest {
     void windowOfNoTokensIsRejectedNamingTheParameter() {
         ResourceInitializationException e = assertThrows(ResourceInitializationException.class,
                 () -> createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, 0));
+        // UIMA reports "Initialization of annotator class ... failed" with the engine's own exception as the cause.
         StringBuilder messages = new StringBuilder();
-        for (Throwable t = e; t != null; t = t.getCause()) messages.append(t.getMessage());
-        assertTrue(messages.toString().contains(TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS), messages.toString());
+        for (Throwable t = e; t != null; t = t.getCause()) messages.append(t.getMessage()).append('\n');
+        assertTrue(messages.toString().contains("Parameter " + TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS),
+                messages.toString());
     }
 }
