@@ -29,14 +29,20 @@ final class EvaluateCommand implements Command {
 
     @Override
     public String usage() {
-        return "evaluate --model MODEL|default --quadruples FILE [--skip-malformed] [--json]";
+        return "evaluate --model MODEL|default (--quadruples FILE [--skip-malformed] | --conllu FILE) [--json]";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples"), Set.of("json", "skip-malformed"));
-        TetherModel model = ModelLocator.load(a.value("model", ModelLocator.DEFAULT));
-        if (!a.has("quadruples")) throw new UsageException("give the labelled data with --quadruples");
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu"), Set.of("json", "skip-malformed"));
+        String modelLocation = a.value("model", ModelLocator.DEFAULT);
+        TetherModel model = ModelLocator.load(modelLocation);
+        if (a.has("quadruples") == a.has("conllu")) {
+            throw new UsageException("give the gold data with either --quadruples or --conllu");
+        }
+        if (a.has("conllu")) {
+            return new RunningTextReport(modelLocation, model).run(Path.of(a.required("conllu")), a.has("json"), out);
+        }
         QuadrupleSet set = new QuadrupleReader(a.has("skip-malformed")).read(Path.of(a.required("quadruples")));
         QuadrupleEvaluation e = new QuadrupleEvaluator().evaluate(model, set.quadruples());
         if (a.has("json")) {

@@ -22,6 +22,7 @@ public final class Tether {
         register(new TrainCommand());
         register(new EvaluateCommand());
         register(new InspectCommand());
+        register(new AnnotateCommand());
     }
 
     private void register(Command c) {

@@ -12,6 +12,7 @@ import dev.tether.attachment.Quadruple;
 import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.QuadrupleSet;
+import dev.tether.treebank.TreebankExamples;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.IOException;
@@ -83,9 +84,15 @@ public final class ModelTrainer {
         return this;
     }
 
-    /** Records a source counted by other means (for example a treebank). */
-    public void recordSource(ModelSource source) {
-        sources.add(source);
+    /**
+     * Counts the training events read off a treebank: every head-choice example, and every classic quadruple among
+     * them. {@code name} and {@code sha256} identify the file in the model's list of sources.
+     */
+    public ModelTrainer addTreebank(TreebankExamples treebank, String name, String sha256) {
+        for (AttachmentExample e : treebank.examples()) addExample(e);
+        for (LabelledQuadruple q : treebank.quadruples()) addQuadruple(q);
+        sources.add(new ModelSource(name, "treebank", treebank.examples().size(), 0, sha256));
+        return this;
     }
 
     public TetherModel build() {

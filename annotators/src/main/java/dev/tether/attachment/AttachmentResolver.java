@@ -1,0 +1,147 @@
+package dev.tether.attachment;
+
+import dev.tether.candidates.HeadClass;
+import dev.tether.model.LoadedModels;
+import dev.tether.model.ModelHolder;
+import dev.tether.model.TetherModel;
+import dev.tether.type.AttachmentAmbiguity;
+import dev.tether.type.AttachmentDecision;
+import dev.tether.type.ScoredHead;
+import org.apache.uima.UimaContext;
+import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
+import org.apache.uima.fit.component.JCasAnnotator_ImplBase;
+import org.apache.uima.fit.descriptor.ConfigurationParameter;
+import org.apache.uima.fit.descriptor.ExternalResource;
+import org.apache.uima.fit.descriptor.TypeCapability;
+import org.apache.uima.fit.util.JCasUtil;
+import org.apache.uima.jcas.JCas;
+import org.apache.uima.jcas.cas.FSArray;
+import org.apache.uima.jcas.cas.IntegerArray;
+import org.apache.uima.jcas.cas.StringArray;
+import org.apache.uima.jcas.tcas.Annotation;
+import org.apache.uima.resource.ResourceInitializationException;
+import org.apache.uima.util.Level;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * Chooses the head of every prepositional phrase that the candidate finder marked, among all its candidates, and
+ * writes an {@link AttachmentDecision} with the probability, the margin to the runner-up, the ranked candidates and
+ * the statistic that decided. The model is loaded once per process and shared by all instances: bind a
+ * {@link dev.tether.model.SharedModelResource} under {@link #RES_MODEL}, or name a model with {@link #PARAM_MODEL}.
+ */
+@TypeCapability(inputs = "dev.tether.type.AttachmentAmbiguity", outputs = "dev.tether.type.AttachmentDecision")
+public class AttachmentResolver extends JCasAnnotator_ImplBase {
+    /** Model location: {@code default} for the shipped model, or the path of a model file. Ignored when a shared model resource is bound. */
+    public static final String PARAM_MODEL = "model";
+    @ConfigurationParameter(name = PARAM_MODEL, mandatory = false, defaultValue = LoadedModels.DEFAULT)
+    private String modelLocation;
+
+    /** How many ranked candidates each decision keeps (the chosen one included). */
+    public static final String PARAM_RANKING_SIZE = "rankingSize";
+    @ConfigurationParameter(name = PARAM_RANKING_SIZE, mandatory = false, defaultValue = "5")
+    private int rankingSize;
+
+    /** Key of the optional shared model resource ({@link ModelHolder}). */
+    public static final String RES_MODEL = "sharedModel";
+    @ExternalResource(key = RES_MODEL, mandatory = false)
+    private ModelHolder sharedModel;
+
+    private TetherModel model;
+    private HeadChoiceScorer scorer;
+    private long decisions;
+    private long documents;
+
+    @Override
+    public void initialize(UimaContext context) throws ResourceInitializationException {
+        super.initialize(context);
+        if (rankingSize < 1) {
+            throw new ResourceInitializationException(new IllegalArgumentException(
+                    "parameter " + PARAM_RANKING_SIZE + " must be at least 1, got " + rankingSize));
+        }
+        try {
+            model = sharedModel != null ? sharedModel.model() : LoadedModels.get(modelLocation);
+        } catch (IOException e) {
+            throw new ResourceInitializationException(new IOException("cannot load the model given by parameter "
+                    + PARAM_MODEL + ": " + e.getMessage(), e));
+        }
+        scorer = model.headChoiceScorer();
+        getLogger().log(Level.CONFIG, "attachment resolver uses model " + model.id());
+    }
+
+    /** The model this instance scores with (instances share it). */
+    public TetherModel model() {
+        return model;
+    }
+
+    @Override
+    public void process(JCas jcas) throws AnalysisEngineProcessException {
+        documents++;
+        List<AttachmentAmbiguity> ambiguities = new ArrayList<>(JCasUtil.select(jcas, AttachmentAmbiguity.class));
+        for (AttachmentAmbiguity a : ambiguities) {
+            FSArray<?> candidates = a.getCandidates();
+            if (candidates == null || candidates.size() == 0) continue;
+            AttachmentQuery query = query(a);
+            HeadChoice choice = scorer.choose(query);
+            write(jcas, a, query, choice);
+            decisions++;
+        }
+    }
+
+    static AttachmentQuery query(AttachmentAmbiguity a) {
+        FSArray<?> candidates = a.getCandidates();
+        StringArray classes = a.getCandidateClasses();
+        IntegerArray distances = a.getCandidateDistances();
+        int n = candidates.size();
+        String[] heads = new String[n];
+        HeadClass[] headClasses = new HeadClass[n];
+        int[] d = new int[n];
+        for (int i = 0; i < n; i++) {
+            Annotation head = (Annotation) candidates.get(i);
+            heads[i] = head.getCoveredText();
+            headClasses[i] = HeadClass.valueOf(classes.get(i).toUpperCase(Locale.ROOT));
+            d[i] = distances != null ? distances.get(i) : i + 1;
+        }
+        String object = a.getObject() != null ? a.getObject().getCoveredText() : "";
+        return new AttachmentQuery(a.getPreposition().getCoveredText(), object, heads, headClasses, d);
+    }
+
+    private void write(JCas jcas, AttachmentAmbiguity a, AttachmentQuery q, HeadChoice choice) {
+        FSArray<?> candidates = a.getCandidates();
+        int best = choice.best();
+        AttachmentDecision d = new AttachmentDecision(jcas, a.getBegin(), a.getEnd());
+        d.setPreposition(a.getPreposition());
+        d.setObject(a.getObject());
+        d.setHead((Annotation) candidates.get(best));
+        d.setSiteClass(q.headClass(best).label());
+        d.setProbability(choice.probability(best));
+        d.setMargin(choice.margin());
+        int[] order = choice.ranking();
+        int k = Math.min(rankingSize, order.length);
+        FSArray<ScoredHead> ranking = new FSArray<>(jcas, k);
+        for (int r = 0; r < k; r++) {
+            int i = order[r];
+            ScoredHead s = new ScoredHead(jcas);
+            s.setHead((Annotation) candidates.get(i));
+            s.setSiteClass(q.headClass(i).label());
+            s.setProbability(choice.probability(i));
+            ranking.set(r, s);
+        }
+        d.setRanking(ranking);
+        d.setEvidenceLevel(choice.evidence(best).label());
+        d.setEvidenceCounts(String.format(Locale.ROOT, "%.0f/%.0f", choice.evidenceHits(best), choice.evidenceTrials(best)));
+        d.setEvidence(EvidenceText.describe(q, choice, best));
+        d.setModelId(model.id());
+        d.addToIndexes();
+    }
+
+    @Override
+    public void collectionProcessComplete() throws AnalysisEngineProcessException {
+        getLogger().log(Level.INFO, String.format(Locale.ROOT, "attachment resolver: %,d decisions in %,d documents (model %s)",
+                decisions, documents, model.id()));
+        super.collectionProcessComplete();
+    }
+}
