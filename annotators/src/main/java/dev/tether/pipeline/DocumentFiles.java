@@ -8,7 +8,10 @@ import java.util.List;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
-/** The documents under an input path: the file itself, or every regular non-hidden file below a folder, sorted. */
+/**
+ * The documents under an input path: the file itself (whatever its name), or every regular, non-hidden {@code .txt}
+ * file below a folder, in sorted order.
+ */
 public final class DocumentFiles {
     private DocumentFiles() {
     }
@@ -18,7 +21,7 @@ public final class DocumentFiles {
         if (Files.isRegularFile(input)) return List.of(input);
         try (Stream<Path> all = Files.walk(input)) {
             return all.filter(Files::isRegularFile)
-                    .filter(p -> !input.relativize(p).toString().startsWith(".") && !p.getFileName().toString().startsWith("."))
+                    .filter(p -> !p.getFileName().toString().startsWith(".") && p.getFileName().toString().endsWith(".txt"))
                     .sorted()
                     .collect(Collectors.toList());
         }
