@@ -127,7 +127,8 @@ class TetherCommandLineTest {
             assertTrue(run.err().contains(input.toString()), run::toString);
             assertFalse(Files.exists(model), input::toString);
         }
-        assertTrue(CommandLineRun.of("train", "--quadruples", label.toString(), "--out", "x").err().contains("'Verb'"));
+        assertTrue(CommandLineRun.of("train", "--quadruples", label.toString(), "--out", dir.resolve("never.tether").toString())
+                .err().contains("'Verb'"));
     }
 
     @Test
