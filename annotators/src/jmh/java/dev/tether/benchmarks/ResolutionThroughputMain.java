@@ -1,0 +1,48 @@
+package dev.tether.benchmarks;
+
+import org.openjdk.jmh.results.RunResult;
+import org.openjdk.jmh.runner.Runner;
+import org.openjdk.jmh.runner.options.CommandLineOptions;
+import org.openjdk.jmh.runner.options.OptionsBuilder;
+
+import java.util.Collection;
+
+/**
+ * Runs {@link ResolutionThroughput} and prints tokens per second for the finder plus resolver and for the whole
+ * pipeline, and the share of the whole pipeline's time that finder plus resolver take, all from one run. JMH
+ * options on the command line are passed through (for example {@code -f 1 -wi 3 -i 5}).
+ */
+public final class ResolutionThroughputMain {
+    private ResolutionThroughputMain() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        CommandLineOptions cli = new CommandLineOptions(args);
+        Collection<RunResult> results = new Runner(new OptionsBuilder().parent(cli)
+                .include(ResolutionThroughput.class.getSimpleName()).threads(1).build()).run();
+        double resolutionMs = Double.NaN;
+        double wholeMs = Double.NaN;
+        for (RunResult r : results) {
+            String name = r.getParams().getBenchmark();
+            double ms = r.getPrimaryResult().getScore();
+            if (name.endsWith("finderAndResolver")) resolutionMs = ms;
+            if (name.endsWith("wholePipeline")) wholeMs = ms;
+        }
+        long tokens = countTokens(args);
+        System.out.printf("%ntokens per pass: %,d%n", tokens);
+        System.out.printf("finder + resolver: %.1f ms per pass = %,.0f tokens/s (one thread)%n", resolutionMs, tokens / (resolutionMs / 1000));
+        System.out.printf("whole pipeline:    %.1f ms per pass = %,.0f tokens/s (one thread)%n", wholeMs, tokens / (wholeMs / 1000));
+        System.out.printf("finder + resolver share of the whole pipeline: %.1f%%%n", 100 * resolutionMs / wholeMs);
+    }
+
+    private static long countTokens(String[] args) throws Exception {
+        ResolutionThroughput state = new ResolutionThroughput();
+        state.conllu = "";
+        for (int i = 0; i + 1 < args.length; i++) {
+            if (args[i].equals("-p") && args[i + 1].startsWith("conllu=")) state.conllu = args[i + 1].substring("conllu=".length());
+        }
+        state.setUp();
+        state.tearDown();
+        return state.tokens;
+    }
+}
