@@ -99,14 +99,29 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
         String[] heads = new String[n];
         HeadClass[] headClasses = new HeadClass[n];
         int[] d = new int[n];
+        boolean[] punctuated = new boolean[n];
+        Annotation preposition = a.getPreposition();
+        String text = preposition.getCAS().getDocumentText();
         for (int i = 0; i < n; i++) {
             Annotation head = (Annotation) candidates.get(i);
             heads[i] = head.getCoveredText();
             headClasses[i] = HeadClass.valueOf(classes.get(i).toUpperCase(Locale.ROOT));
             d[i] = distances != null ? distances.get(i) : i + 1;
+            punctuated[i] = hasBreak(text, Math.min(head.getEnd(), preposition.getEnd()), Math.max(head.getBegin(), preposition.getBegin()));
         }
         String object = a.getObject() != null ? a.getObject().getCoveredText() : "";
-        return new AttachmentQuery(a.getPreposition().getCoveredText(), object, heads, headClasses, d);
+        return new AttachmentQuery(preposition.getCoveredText(), object, heads, headClasses, d, punctuated);
+    }
+
+    /** Whether the text between two tokens holds a phrase break, as {@link AttachmentQuery#isBreak} defines it. */
+    private static boolean hasBreak(String text, int from, int to) {
+        for (int k = Math.max(0, from); k < Math.min(to, text.length()); k++) {
+            char ch = text.charAt(k);
+            if (ch == ',' || ch == ':' || ch == ';' || ch == '(' || ch == ')' || ch == '[' || ch == ']') return true;
+            if (ch == '-' && (k == 0 || text.charAt(k - 1) == ' ' || text.charAt(k - 1) == '-')
+                    && (k + 1 >= text.length() || text.charAt(k + 1) == ' ' || text.charAt(k + 1) == '-')) return true;
+        }
+        return false;
     }
 
     private void write(JCas jcas, AttachmentAmbiguity a, AttachmentQuery q, HeadChoice choice) {

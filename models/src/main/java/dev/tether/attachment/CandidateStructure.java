@@ -16,7 +16,7 @@ public final class CandidateStructure {
         int verbsNearer = 0;
         for (int i = 0; i < n; i++) {
             HeadClass c = q.headClass(i);
-            keys[i] = StructureKey.of(c.ordinal(), seenOfClass[c.ordinal()]++, q.distance(i), verbsNearer, i == 0);
+            keys[i] = StructureKey.of(c.ordinal(), seenOfClass[c.ordinal()]++, q.distance(i), verbsNearer, i == 0, q.punctuated(i));
             if (c == HeadClass.VERB && q.distance(i) > 0) verbsNearer++;
         }
         return keys;
