@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.net.URL;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -15,22 +17,41 @@ import org.apache.uima.analysis_engine.AnalysisEngineDescription;
 import org.apache.uima.cas.CAS;
 import org.apache.uima.cas.Type;
 import org.apache.uima.fit.factory.AnalysisEngineFactory;
+import org.apache.uima.jcas.JCas;
+import org.apache.uima.resource.ExternalResourceDependency;
+import org.apache.uima.resource.ResourceSpecifier;
 import org.apache.uima.resource.metadata.ConfigurationParameter;
+import org.apache.uima.resource.metadata.ExternalResourceBinding;
 import org.apache.uima.resource.metadata.Import;
+import org.apache.uima.resource.metadata.ResourceManagerConfiguration;
 import org.apache.uima.util.XMLInputSource;
 import org.junit.jupiter.api.Test;
 
+import dev.tether.attachment.AttachmentResolver;
+import dev.tether.attachment.DecisionChecks;
 import dev.tether.candidates.AttachmentCandidateFinder;
+import dev.tether.model.LoadedModels;
+import dev.tether.model.ModelHolder;
+import dev.tether.model.SharedModelResource;
 import dev.tether.preprocessing.TextPreprocessor;
+import dev.tether.type.AttachmentDecision;
+import dev.tether.type.ScoredHead;
 
 /**
  * Every engine descriptor in {@code dev/tether/engines/} is found by name on the classpath, instantiated with plain
- * UIMA (no uimaFIT factory) and run on a CAS; and its parameters agree with the engine class it names.
+ * UIMA (no uimaFIT factory) and run on a CAS; and its parameters agree with the engine class it names. Example text is
+ * invented, from the maintenance logs of a fictional ferry operator.
  */
 class EngineDescriptorTest {
 
     static final String PREPROCESSOR = "dev.tether.engines.TextPreprocessor";
     static final String FINDER = "dev.tether.engines.AttachmentCandidateFinder";
+    static final String RESOLVER = "dev.tether.engines.AttachmentResolver";
+    static final String RAW_TEXT_PIPELINE = "dev.tether.engines.RawTextPipeline";
+    static final String TAGGED_TEXT_PIPELINE = "dev.tether.engines.TaggedTextPipeline";
+
+    /** Three prepositional phrases: 'on the port engine', 'with a spare', 'from the stores'. */
+    static final String GASKET_ENTRY = "The engineer replaced the gasket on the port engine with a spare from the stores.";
 
     static AnalysisEngineDescription byName(String name) throws Exception {
         Import location = UIMAFramework.getResourceSpecifierFactory().createImport();
@@ -69,6 +90,106 @@ class EngineDescriptorTest {
         assertEquals("in the forward ballast tank", cas.getAnnotationIndex(ambiguity).iterator().next().getCoveredText());
     }
 
+    /** The primitive resolver descriptor alone, its optional model resource left unbound: the parameter's model. */
+    @Test
+    void resolverDescriptorRunsWithPlainUimaWithoutItsSharedResource() throws Exception {
+        AnalysisEngine preprocessor = UIMAFramework.produceAnalysisEngine(byName(PREPROCESSOR));
+        AnalysisEngine finder = UIMAFramework.produceAnalysisEngine(byName(FINDER));
+        AnalysisEngine resolver = UIMAFramework.produceAnalysisEngine(byName(RESOLVER));
+        CAS cas = resolver.newCAS();
+        cas.setDocumentText(GASKET_ENTRY);
+
+        preprocessor.process(cas);
+        finder.process(cas);
+        resolver.process(cas);
+
+        List<AttachmentDecision> decisions = assertSaneDecisions(cas, 3);
+        for (AttachmentDecision d : decisions) {
+            assertEquals(LoadedModels.get(LoadedModels.DEFAULT).id(), d.getModelId(), "the default of parameter model");
+        }
+    }
+
+    @Test
+    void rawTextPipelineRunsWithPlainUima() throws Exception {
+        AnalysisEngine pipeline = UIMAFramework.produceAnalysisEngine(byName(RAW_TEXT_PIPELINE));
+        CAS cas = pipeline.newCAS();
+        cas.setDocumentText(GASKET_ENTRY + " The mate logged a leak in the forward ballast tank.");
+
+        pipeline.process(cas);
+
+        List<AttachmentDecision> decisions = assertSaneDecisions(cas, 4);
+        for (AttachmentDecision d : decisions) {
+            assertTrue(d.getRanking().size() <= 5, "the resolver's default ranking size when the aggregate leaves it unset");
+            assertEquals(LoadedModels.get(LoadedModels.DEFAULT).id(), d.getModelId(), "the shipped model from the resource");
+        }
+    }
+
+    /** Tokens and tags already in the CAS (here from the preprocessor descriptor); the aggregate adds decisions only. */
+    @Test
+    void taggedTextPipelineRunsWithPlainUimaOnTokensAlreadyThere() throws Exception {
+        AnalysisEngine preprocessor = UIMAFramework.produceAnalysisEngine(byName(PREPROCESSOR));
+        AnalysisEngine pipeline = UIMAFramework.produceAnalysisEngine(byName(TAGGED_TEXT_PIPELINE));
+        CAS cas = pipeline.newCAS();
+        cas.setDocumentText(GASKET_ENTRY);
+        preprocessor.process(cas);
+        int tokens = cas.getAnnotationIndex(cas.getTypeSystem().getType("dev.tether.type.Token")).size();
+
+        pipeline.process(cas);
+
+        assertSaneDecisions(cas, 3);
+        assertEquals(tokens, cas.getAnnotationIndex(cas.getTypeSystem().getType("dev.tether.type.Token")).size(),
+                "no tokens of its own");
+    }
+
+    /** An aggregate-level setting of rankingSize reaches the resolver (the override is wired). */
+    @Test
+    void aggregateRankingSizeReachesTheResolver() throws Exception {
+        AnalysisEngineDescription description = byName(RAW_TEXT_PIPELINE);
+        description.getAnalysisEngineMetaData().getConfigurationParameterSettings().setParameterValue("rankingSize", 1);
+        AnalysisEngine pipeline = UIMAFramework.produceAnalysisEngine(description);
+        CAS cas = pipeline.newCAS();
+        cas.setDocumentText(GASKET_ENTRY);
+
+        pipeline.process(cas);
+
+        for (AttachmentDecision d : assertSaneDecisions(cas, 3)) {
+            assertEquals(1, d.getRanking().size(), "rankingSize 1 set on the aggregate");
+        }
+    }
+
+    /** Each aggregate declares the model resource once and binds it to the resolver's dependency of the same interface. */
+    @Test
+    void aggregatesDeclareTheModelOnceAndBindItToTheResolver() throws Exception {
+        for (String name : List.of(RAW_TEXT_PIPELINE, TAGGED_TEXT_PIPELINE)) {
+            AnalysisEngineDescription aggregate = byName(name);
+            ResourceManagerConfiguration resources = aggregate.getResourceManagerConfiguration();
+            assertEquals(1, resources.getExternalResources().length, name + ": one model resource");
+            assertEquals(SharedModelResource.class.getName(), resources.getExternalResources()[0].getImplementationName());
+            ExternalResourceBinding[] bindings = resources.getExternalResourceBindings();
+            assertEquals(1, bindings.length, name);
+            assertEquals("resolver/" + AttachmentResolver.RES_MODEL, bindings[0].getKey(), name);
+            assertEquals(resources.getExternalResources()[0].getName(), bindings[0].getResourceName(), name);
+            ResourceSpecifier resolver = aggregate.getDelegateAnalysisEngineSpecifiers().get("resolver");
+            assertEquals(AttachmentResolver.class.getName(),
+                    ((AnalysisEngineDescription) resolver).getAnnotatorImplementationName(), name);
+            String[] flow = ((org.apache.uima.analysis_engine.metadata.FixedFlow) aggregate.getAnalysisEngineMetaData()
+                    .getFlowConstraints()).getFixedFlow();
+            assertEquals("resolver", flow[flow.length - 1], name + ": the resolver runs last");
+            assertEquals(aggregate.getDelegateAnalysisEngineSpecifiers().size(), flow.length, name + ": every delegate runs");
+        }
+    }
+
+    @Test
+    void resolverDescriptorAgreesWithItsClass() throws Exception {
+        AnalysisEngineDescription xml = byName(RESOLVER);
+        assertAgrees(xml, AttachmentResolver.class);
+        ExternalResourceDependency[] dependencies = xml.getExternalResourceDependencies();
+        assertEquals(1, dependencies.length);
+        assertEquals(AttachmentResolver.RES_MODEL, dependencies[0].getKey());
+        assertEquals(ModelHolder.class.getName(), dependencies[0].getInterfaceName());
+        assertTrue(dependencies[0].isOptional(), "the model resource is optional");
+    }
+
     @Test
     void preprocessorDescriptorAgreesWithItsClass() throws Exception {
         assertAgrees(byName(PREPROCESSOR), TextPreprocessor.class);
@@ -77,6 +198,22 @@ class EngineDescriptorTest {
     @Test
     void finderDescriptorAgreesWithItsClass() throws Exception {
         assertAgrees(byName(FINDER), AttachmentCandidateFinder.class);
+    }
+
+    /** Every decision in {@code cas} passes {@link DecisionChecks#assertSane}; there are at least {@code minimum}. */
+    private static List<AttachmentDecision> assertSaneDecisions(CAS cas, int minimum) throws Exception {
+        JCas jcas = cas.getJCas();
+        List<AttachmentDecision> decisions = new ArrayList<>(jcas.select(AttachmentDecision.class).asList());
+        assertTrue(decisions.size() >= minimum, "at least " + minimum + " decisions in: " + cas.getDocumentText()
+                + ", found " + decisions.size());
+        for (AttachmentDecision d : decisions) {
+            DecisionChecks.assertSane(d);
+            for (ScoredHead s : d.getRanking()) {
+                assertTrue(s.getHead().getEnd() <= d.getBegin() || s.getHead().getBegin() >= d.getEnd(),
+                        "a candidate head lies outside its own phrase: " + d.getCoveredText());
+            }
+        }
+        return decisions;
     }
 
     /** Same implementation, same parameters (name, type, mandatory, multi-valued) and same defaults. */
