@@ -31,34 +31,30 @@ public final class BackedOffScorer implements QuadrupleScorer {
         if (s >= 0 && quad.trials(s) > 0) {
             return decision(quad.hits(s), quad.trials(s), DecisionBasis.QUADRUPLE);
         }
-        double hits = 0;
-        double trials = 0;
-        for (SubTuple part : TRIPLES) {
-            TupleCounts t = counts.table(p, part);
-            int slot = t.slot(part.key(v, n1, n2));
-            if (slot >= 0) {
-                hits += t.hits(slot);
-                trials += t.trials(slot);
+        for (int level = 0; level < POOLED.length; level++) {
+            double hits = 0;
+            double trials = 0;
+            for (SubTuple part : POOLED[level]) {
+                TupleCounts t = counts.table(p, part);
+                int slot = t.slot(part.key(v, n1, n2));
+                if (slot >= 0) {
+                    hits += t.hits(slot);
+                    trials += t.trials(slot);
+                }
             }
+            if (trials > 0) return decision(hits, trials, POOLED_BASIS[level]);
         }
-        if (trials > 0) return decision(hits, trials, DecisionBasis.TRIPLES);
-        for (SubTuple part : PAIRS) {
-            TupleCounts t = counts.table(p, part);
-            int slot = t.slot(part.key(v, n1, n2));
-            if (slot >= 0) {
-                hits += t.hits(slot);
-                trials += t.trials(slot);
-            }
-        }
-        if (trials > 0) return decision(hits, trials, DecisionBasis.PAIRS);
         if (counts.prepositionCount(p) > 0) {
             return decision(counts.prepositionNounCount(p), counts.prepositionCount(p), DecisionBasis.PREPOSITION);
         }
         return fallback();
     }
 
-    private static final SubTuple[] TRIPLES = {SubTuple.VERB_NOUN1, SubTuple.VERB_NOUN2, SubTuple.NOUN1_NOUN2};
-    private static final SubTuple[] PAIRS = {SubTuple.VERB, SubTuple.NOUN1, SubTuple.NOUN2};
+    /** The pooled levels in back-off order: the three triples with the preposition, then the three pairs. */
+    private static final SubTuple[][] POOLED = {
+            {SubTuple.VERB_NOUN1, SubTuple.VERB_NOUN2, SubTuple.NOUN1_NOUN2},
+            {SubTuple.VERB, SubTuple.NOUN1, SubTuple.NOUN2}};
+    private static final DecisionBasis[] POOLED_BASIS = {DecisionBasis.TRIPLES, DecisionBasis.PAIRS};
 
     private static QuadrupleDecision decision(double nounHits, double trials, DecisionBasis basis) {
         double pn = nounHits / trials;
