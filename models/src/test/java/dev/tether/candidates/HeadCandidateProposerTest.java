@@ -78,6 +78,102 @@ class HeadCandidateProposerTest {
     }
 
     @Test
+    void aVerbGroupStopsBeforeToAndTheNextGroupIsProposedToo() {
+        PrepositionCandidates in = all("In/IN fact/NN the/DT crew/NN did/VBD n't/RB want/VB to/TO wait/VB ./.").get(0);
+        assertArrayEquals(new int[]{6, 8}, heads(in), "'want' is the main verb of 'did n't want'; 'wait' heads the next group");
+    }
+
+    @Test
+    void aParticipleClauseBeforeTheMainVerbLeavesTheMainVerbAmongTheCandidates() {
+        PrepositionCandidates in = all("In/IN the/DT storm/NN ,/, ignoring/VBG the/DT forecast/NN ,/, the/DT skipper/NN "
+                + "sailed/VBD ./.").get(0);
+        assertArrayEquals(new int[]{4, 10}, heads(in), "ignoring, then sailed");
+    }
+
+    @Test
+    void aPrepositionalPredicateAfterBeIsProposed() {
+        // UD English EWT heads "the delay was about money" on "money" (copula and case depend on it).
+        PrepositionCandidates in = all("In/IN my/PRP$ view/NN ,/, the/DT delay/NN was/VBD about/IN money/NN ./.").get(0);
+        assertArrayEquals(new int[]{6, 8}, heads(in), "was, and the object of 'about'");
+        assertEquals(HeadClass.NOUN, in.headClass(1));
+    }
+
+    @Test
+    void aPhraseWithARelativeObjectGetsTheVerbOfTheRelativeClause() {
+        PrepositionCandidates at = all("We/PRP found/VBD the/DT berth/NN at/IN which/WDT the/DT ferry/NN docks/VBZ ./.").get(0);
+        assertEquals(5, at.object(), "'which' is the object, not 'ferry'");
+        assertArrayEquals(new int[]{3, 1, 0, 8}, heads(at), "berth, found, We; and docks after the object");
+    }
+
+    @Test
+    void coordinatedPrepositionsShareTheObject() {
+        List<PrepositionCandidates> c = all("We/PRP sail/VBP on/IN or/CC about/IN May/NNP 3/CD ./.");
+        assertEquals(2, c.size(), "on and about");
+        assertEquals(5, c.get(0).object(), "'on' reaches past 'or about' to 'May'");
+        assertEquals(5, c.get(1).object());
+        assertEquals(6, all("The/DT crate/NN went/VBD on/IN to/TO the/DT quay/NN").get(0).object(), "'on to' is one preposition");
+    }
+
+    @Test
+    void aGerundThatEndsItsPhraseIsAnObject() {
+        PrepositionCandidates c = all("We/PRP thanked/VBD them/PRP for/IN sharing/VBG ./.").get(0);
+        assertEquals(4, c.object());
+        assertArrayEquals(new int[]{2, 1, 0}, heads(c));
+        assertEquals(6, all("He/PRP left/VBD because/IN of/IN their/PRP$ constant/JJ complaining/VBG").get(1).object());
+        assertEquals(6, all("We/PRP thanked/VBD them/PRP for/IN checking/VBG the/DT hull/NN").get(0).object(),
+                "a gerund with an object of its own is not the object: the search goes on to 'hull', as for a participle");
+    }
+
+    @Test
+    void butAfterNothingIsAPreposition() {
+        PrepositionCandidates but = all("They/PRP had/VBD nothing/NN but/CC praise/NN for/IN the/DT crew/NN").get(0);
+        assertEquals(3, but.preposition());
+        assertEquals(4, but.object());
+        assertEquals(2, but.head(0), "nothing");
+        assertTrue(all("They/PRP waited/VBD but/CC the/DT ferry/NN left/VBD").isEmpty(), "an ordinary 'but' is a coordinator");
+    }
+
+    @Test
+    void degreePhrasesAlsoGetThePhraseAfterThem() {
+        // UD English EWT attaches "at least" to the number or noun it modifies.
+        PrepositionCandidates least = all("The/DT ferry/NN carries/VBZ at/IN least/JJS two/CD boats/NNS ./.").get(0);
+        assertEquals(4, least.object());
+        assertArrayEquals(new int[]{2, 1, 5}, heads(least), "carries, ferry, two (by distance; a tie goes to the earlier word)");
+        PrepositionCandidates far = all("She/PRP is/VBZ by/IN far/RB the/DT best/JJS deckhand/NN ./.").get(0);
+        assertEquals(3, far.object());
+        assertTrue(far.indexOf(6) >= 0, "deckhand");
+    }
+
+    @Test
+    void theCurrencySignHeadsAnAmount() {
+        // Penn Treebank tag "$" for the sign; UD English EWT heads "$ 40" on "$".
+        PrepositionCandidates c = all("It/PRP cost/VBD $/$ 40/CD for/IN the/DT rope/NN").get(0);
+        assertArrayEquals(new int[]{2, 1, 0}, heads(c), "$, cost, It; not 40");
+    }
+
+    @Test
+    void whichAndHowRightBeforeThePrepositionAreCandidates() {
+        PrepositionCandidates of = all("Which/WDT of/IN these/DT fits/VBZ ?/.").get(0);
+        assertArrayEquals(new int[]{0, 3}, heads(of), "Which, and the following verb");
+        PrepositionCandidates about = all("How/WRB about/IN Tuesday/NNP ?/.").get(0);
+        assertArrayEquals(new int[]{0}, heads(about));
+        assertEquals(HeadClass.ADVERB, about.headClass(0));
+    }
+
+    @Test
+    void aParticipleOpeningTheSentenceDoesNotStopTheFollowingHead() {
+        PrepositionCandidates on = all("Based/VBN on/IN the/DT log/NN ,/, the/DT engineer/NN replaced/VBD the/DT seal/NN ./.").get(0);
+        assertArrayEquals(new int[]{0, 7}, heads(on), "Based, and replaced");
+    }
+
+    @Test
+    void onlyBecauseOfTakesASubordinatorAsAPreposition() {
+        List<PrepositionCandidates> c = all("They/PRP made/VBD one/CD choice/NN ,/, that/IN of/IN waiting/VBG ./.");
+        assertEquals(1, c.size());
+        assertEquals(6, c.get(0).preposition(), "'of' only; 'that of' is not a two-word preposition");
+    }
+
+    @Test
     void subordinatorsAndInfinitivalToAreNotPrepositions() {
         assertTrue(all("She/PRP said/VBD that/IN the/DT valve/NN leaked/VBD").isEmpty());
         assertTrue(all("We/PRP went/VBD to/TO inspect/VB the/DT hull/NN").isEmpty());
