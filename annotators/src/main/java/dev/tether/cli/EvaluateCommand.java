@@ -29,19 +29,21 @@ final class EvaluateCommand implements Command {
 
     @Override
     public String usage() {
-        return "evaluate --model MODEL|default (--quadruples FILE [--skip-malformed] | --conllu FILE) [--json]";
+        return "evaluate --model MODEL|default (--quadruples FILE [--skip-malformed] | --conllu FILE [--gold-tags]) [--json]";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu"), Set.of("json", "skip-malformed"));
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu"), Set.of("json", "skip-malformed", "gold-tags"));
         String modelLocation = a.value("model", ModelLocator.DEFAULT);
         TetherModel model = ModelLocator.load(modelLocation);
         if (a.has("quadruples") == a.has("conllu")) {
             throw new UsageException("give the gold data with either --quadruples or --conllu");
         }
         if (a.has("conllu")) {
-            return new RunningTextReport(modelLocation, model).run(Path.of(a.required("conllu")), a.has("json"), out);
+            Path conllu = Path.of(a.required("conllu"));
+            if (a.has("gold-tags")) return new GoldTagReport(model).run(conllu, a.has("json"), out);
+            return new RunningTextReport(modelLocation, model).run(conllu, a.has("json"), out);
         }
         QuadrupleSet set = new QuadrupleReader(a.has("skip-malformed")).read(Path.of(a.required("quadruples")));
         QuadrupleEvaluation e = new QuadrupleEvaluator().evaluate(model, set.quadruples());

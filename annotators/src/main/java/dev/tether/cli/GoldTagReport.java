@@ -1,0 +1,70 @@
+package dev.tether.cli;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import dev.tether.candidates.HeadCandidateProposer;
+import dev.tether.evaluation.Accuracy;
+import dev.tether.evaluation.GoldTagEvaluation;
+import dev.tether.evaluation.GoldTagEvaluator;
+import dev.tether.model.TetherModel;
+import dev.tether.treebank.TreebankExampleExtractor;
+import dev.tether.treebank.TreebankExamples;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+
+/** {@code tether evaluate --conllu FILE --gold-tags}: head choice on the treebank's own tokens and tags. */
+final class GoldTagReport {
+    private final TetherModel model;
+
+    GoldTagReport(TetherModel model) {
+        this.model = model;
+    }
+
+    int run(Path conllu, boolean json, PrintStream out) throws IOException {
+        if (Files.isDirectory(conllu)) throw new IOException(conllu + " is a directory; give a CoNLL-U file");
+        TreebankExamples examples = new TreebankExampleExtractor(new HeadCandidateProposer()).extract(conllu);
+        GoldTagEvaluation e = new GoldTagEvaluator().evaluate(model, examples);
+        Accuracy a = e.attachment();
+        if (json) {
+            try (JsonGenerator g = new JsonFactory().createGenerator(out).useDefaultPrettyPrinter()) {
+                g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+                g.writeStartObject();
+                g.writeStringField("model", model.id());
+                g.writeStringField("data", conllu.getFileName().toString());
+                g.writeStringField("tags", "gold");
+                g.writeNumberField("n", a.total());
+                g.writeObjectFieldStart("attachment");
+                g.writeNumberField("accuracy", a.value());
+                g.writeNumberField("correct", a.correct());
+                g.writeNumberField("n", a.total());
+                g.writeNumberField("candidateRecall", e.candidateRecall().value());
+                g.writeEndObject();
+                g.writeObjectFieldStart("baselines");
+                for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) {
+                    g.writeObjectFieldStart(c.getKey());
+                    g.writeNumberField("accuracy", c.getValue().value());
+                    g.writeNumberField("correct", c.getValue().correct());
+                    g.writeNumberField("n", c.getValue().total());
+                    g.writeEndObject();
+                }
+                g.writeEndObject();
+                g.writeEndObject();
+            }
+            out.println();
+        } else {
+            double[] ci = a.interval95();
+            out.printf("model %s on %s with gold tokens and tags: %,d gold prepositional attachments%n", model.id(),
+                    conllu.getFileName(), a.total());
+            out.printf("%-28s %7.2f%%  [%.2f, %.2f]  <- model%n", "attachment", 100 * a.value(), 100 * ci[0], 100 * ci[1]);
+            for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) {
+                out.printf("%-28s %7.2f%%  (%,d of %,d)%n", c.getKey(), 100 * c.getValue().value(), c.getValue().correct(), c.getValue().total());
+            }
+            out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
+        }
+        return Tether.OK;
+    }
+}
