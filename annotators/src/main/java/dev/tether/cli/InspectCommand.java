@@ -1,5 +1,6 @@
 package dev.tether.cli;
 
+import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.counts.SubTuple;
 import dev.tether.model.ModelFile;
@@ -49,7 +50,14 @@ final class InspectCommand implements Command {
         out.printf("  pairs    v-p         %,10d%n", q.distinct(SubTuple.VERB));
         out.printf("           n1-p        %,10d%n", q.distinct(SubTuple.NOUN1));
         out.printf("           p-n2        %,10d%n", q.distinct(SubTuple.NOUN2));
-        out.printf("approximate heap of the count tables: %.1f MB%n", q.approximateBytes() / 1e6);
+        HeadChoiceCounts h = m.headChoice();
+        out.printf("head choice    %,d words, %,d prepositions, %,d structural keys%n", h.words().size(),
+                h.prepositions().size(), h.structure().size());
+        out.printf("  head with object     %,10d%n", h.distinct(HeadChoiceCounts.Part.HEAD_OBJECT));
+        out.printf("  head                 %,10d%n", h.distinct(HeadChoiceCounts.Part.HEAD));
+        out.printf("  class with object    %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS_OBJECT));
+        out.printf("  class                %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS));
+        out.printf("approximate heap of the count tables: %.1f MB%n", (q.approximateBytes() + h.approximateBytes()) / 1e6);
         return Tether.OK;
     }
 }
