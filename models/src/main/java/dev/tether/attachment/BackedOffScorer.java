@@ -27,19 +27,18 @@ public final class BackedOffScorer implements QuadrupleScorer {
     public QuadrupleDecision decide(int v, int n1, int p, int n2) {
         if (p <= 0 || p > counts.prepositions().size()) return fallback();
         TupleCounts quad = counts.table(p, SubTuple.VERB_NOUN1_NOUN2);
-        int s = quad.slot(SubTuple.VERB_NOUN1_NOUN2.key(v, n1, n2));
-        if (s >= 0 && quad.trials(s) > 0) {
-            return decision(quad.hits(s), quad.trials(s), DecisionBasis.QUADRUPLE);
+        long q = quad.find(SubTuple.VERB_NOUN1_NOUN2.key(v, n1, n2));
+        if (q != TupleCounts.ABSENT && TupleCounts.trialsIn(q) > 0) {
+            return decision(TupleCounts.hitsIn(q), TupleCounts.trialsIn(q), DecisionBasis.QUADRUPLE);
         }
         for (int level = 0; level < POOLED.length; level++) {
             double hits = 0;
             double trials = 0;
             for (SubTuple part : POOLED[level]) {
-                TupleCounts t = counts.table(p, part);
-                int slot = t.slot(part.key(v, n1, n2));
-                if (slot >= 0) {
-                    hits += t.hits(slot);
-                    trials += t.trials(slot);
+                long e = counts.table(p, part).find(part.key(v, n1, n2));
+                if (e != TupleCounts.ABSENT) {
+                    hits += TupleCounts.hitsIn(e);
+                    trials += TupleCounts.trialsIn(e);
                 }
             }
             if (trials > 0) return decision(hits, trials, POOLED_BASIS[level]);

@@ -48,10 +48,10 @@ public final class HeadChoiceScorer {
         for (int p = 1; p <= counts.prepositions().size(); p++) {
             TupleCounts t = counts.lexical(p, Part.CLASS);
             for (int c = 0; c < CLASSES.length; c++) {
-                int s = t.slot(TupleKey.of(c + 1));
-                if (s >= 0) {
-                    hits[c] += t.hits(s);
-                    trials[c] += t.trials(s);
+                long e = t.find(TupleKey.of(c + 1));
+                if (e != TupleCounts.ABSENT) {
+                    hits[c] += TupleCounts.hitsIn(e);
+                    trials[c] += TupleCounts.trialsIn(e);
                 }
             }
         }
@@ -82,38 +82,36 @@ public final class HeadChoiceScorer {
         for (int i = 0; i < n; i++) {
             HeadClass hc = q.headClass(i);
             int c = hc.ordinal();
-            int ss = structure.slot(structureKeys[i]);
-            double s = ss >= 0 ? (structure.hits(ss) + SMOOTHING * PRIOR) / (structure.trials(ss) + SMOOTHING) : PRIOR / 4;
+            long se = structure.find(structureKeys[i]);
+            double s = se != TupleCounts.ABSENT
+                    ? (TupleCounts.hitsIn(se) + SMOOTHING * PRIOR) / (TupleCounts.trialsIn(se) + SMOOTHING) : PRIOR / 4;
             double pc = classRate[c];
             double pw = pc;
             HeadChoice.Evidence ev = HeadChoice.Evidence.NONE;
             double eh = 0;
             double et = 0;
             if (p > 0) {
-                TupleCounts classTable = counts.lexical(p, Part.CLASS);
-                int cs = classTable.slot(TupleKey.of(c + 1));
-                if (cs >= 0) {
-                    pc = (classTable.hits(cs) + SMOOTHING * classRate[c]) / (classTable.trials(cs) + SMOOTHING);
+                long ce = counts.lexical(p, Part.CLASS).find(TupleKey.of(c + 1));
+                if (ce != TupleCounts.ABSENT) {
+                    eh = TupleCounts.hitsIn(ce);
+                    et = TupleCounts.trialsIn(ce);
+                    pc = (eh + SMOOTHING * classRate[c]) / (et + SMOOTHING);
                     ev = HeadChoice.Evidence.CLASS;
-                    eh = classTable.hits(cs);
-                    et = classTable.trials(cs);
                 }
                 pw = pc;
                 int h = words.id(headKey(normalizer, q.head(i), hc));
                 double midHits = 0;
                 double midTrials = 0;
-                TupleCounts head = counts.lexical(p, Part.HEAD);
-                int hs = h > 0 ? head.slot(TupleKey.of(h, c + 1)) : -1;
-                TupleCounts classObject = counts.lexical(p, Part.CLASS_OBJECT);
-                int cos = o > 0 ? classObject.slot(TupleKey.of(c + 1, o)) : -1;
-                if (cos >= 0) {
-                    midHits += classObject.hits(cos);
-                    midTrials += classObject.trials(cos);
+                long he = h > 0 ? counts.lexical(p, Part.HEAD).find(TupleKey.of(h, c + 1)) : TupleCounts.ABSENT;
+                long coe = o > 0 ? counts.lexical(p, Part.CLASS_OBJECT).find(TupleKey.of(c + 1, o)) : TupleCounts.ABSENT;
+                if (coe != TupleCounts.ABSENT) {
+                    midHits += TupleCounts.hitsIn(coe);
+                    midTrials += TupleCounts.trialsIn(coe);
                     ev = HeadChoice.Evidence.CLASS_WITH_OBJECT;
                 }
-                if (hs >= 0) {
-                    midHits += head.hits(hs);
-                    midTrials += head.trials(hs);
+                if (he != TupleCounts.ABSENT) {
+                    midHits += TupleCounts.hitsIn(he);
+                    midTrials += TupleCounts.trialsIn(he);
                     ev = HeadChoice.Evidence.HEAD;
                 }
                 if (midTrials > 0) {
@@ -121,13 +119,12 @@ public final class HeadChoiceScorer {
                     eh = midHits;
                     et = midTrials;
                 }
-                TupleCounts headObject = counts.lexical(p, Part.HEAD_OBJECT);
-                int hos = h > 0 && o > 0 ? headObject.slot(TupleKey.of(h, c + 1, o)) : -1;
-                if (hos >= 0) {
-                    pw = (headObject.hits(hos) + SMOOTHING * pw) / (headObject.trials(hos) + SMOOTHING);
+                long hoe = h > 0 && o > 0 ? counts.lexical(p, Part.HEAD_OBJECT).find(TupleKey.of(h, c + 1, o)) : TupleCounts.ABSENT;
+                if (hoe != TupleCounts.ABSENT) {
+                    eh = TupleCounts.hitsIn(hoe);
+                    et = TupleCounts.trialsIn(hoe);
+                    pw = (eh + SMOOTHING * pw) / (et + SMOOTHING);
                     ev = HeadChoice.Evidence.HEAD_WITH_OBJECT;
-                    eh = headObject.hits(hos);
-                    et = headObject.trials(hos);
                 }
             }
             score[i] = s * Math.pow(pc / classRate[c], classWeight) * Math.pow(pw / pc, wordWeight);

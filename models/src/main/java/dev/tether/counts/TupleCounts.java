@@ -1,6 +1,6 @@
 package dev.tether.counts;
 
-import gnu.trove.map.hash.TLongIntHashMap;
+import gnu.trove.map.hash.TLongLongHashMap;
 
 import java.io.DataInput;
 import java.io.DataOutput;
@@ -8,52 +8,61 @@ import java.io.IOException;
 
 /**
  * An immutable count table: for each packed key, how often the tuple was seen ({@code trials}) and how often with
- * the outcome counted ({@code hits}; for the quadruple model, attachment to the noun). Lookup is one primitive hash
- * probe to a slot, then two array reads. Keys are stored in ascending order, which makes the serialized form
- * independent of hash-table history.
+ * the outcome counted ({@code hits}; for the quadruple model, attachment to the noun). Both counts of a key travel
+ * together as one {@code long} entry (two {@code float}s, exact for whole counts below 2^24), so a lookup is one
+ * primitive hash probe and nothing else: {@link #find} gives the entry, {@link #hitsIn} and {@link #trialsIn} read
+ * it. Keys are also kept in ascending order for iteration and for a serialized form that does not depend on
+ * hash-table history.
  */
 public final class TupleCounts {
-    private static final int ABSENT = -1;
-    private final TLongIntHashMap slots;
-    private final long[] keys;
-    private final double[] hits;
-    private final double[] trials;
+    /** What {@link #find} returns for a tuple never seen; no pair of non-negative counts packs to it. */
+    public static final long ABSENT = -1L;
 
-    TupleCounts(long[] keys, double[] hits, double[] trials) {
+    private final TLongLongHashMap entries;
+    private final long[] keys;
+    private final long[] packed;
+
+    TupleCounts(long[] keys, long[] packed) {
         this.keys = keys;
-        this.hits = hits;
-        this.trials = trials;
-        this.slots = new TLongIntHashMap(Math.max(16, keys.length * 2), 0.5f, Long.MIN_VALUE, ABSENT);
-        for (int i = 0; i < keys.length; i++) slots.put(keys[i], i);
+        this.packed = packed;
+        this.entries = new TLongLongHashMap(Math.max(16, keys.length * 2), 0.5f, Long.MIN_VALUE, ABSENT);
+        for (int i = 0; i < keys.length; i++) entries.put(keys[i], packed[i]);
     }
 
     public static TupleCounts empty() {
-        return new TupleCounts(new long[0], new double[0], new double[0]);
+        return new TupleCounts(new long[0], new long[0]);
     }
 
-    /** The slot of {@code key}, or -1 when the tuple was never seen. */
-    public int slot(long key) {
-        return slots.get(key);
+    /** The two counts of one tuple in one entry. */
+    static long pack(double hits, double trials) {
+        return ((long) Float.floatToIntBits((float) hits) << 32) | (Float.floatToIntBits((float) trials) & 0xFFFFFFFFL);
     }
 
-    public double hits(int slot) {
-        return hits[slot];
+    /** The entry of {@code key}, or {@link #ABSENT} when the tuple was never seen. */
+    public long find(long key) {
+        return entries.get(key);
     }
 
-    public double trials(int slot) {
-        return trials[slot];
+    /** Hits of an entry returned by {@link #find} (not {@link #ABSENT}). */
+    public static double hitsIn(long entry) {
+        return Float.intBitsToFloat((int) (entry >>> 32));
+    }
+
+    /** Trials of an entry returned by {@link #find} (not {@link #ABSENT}). */
+    public static double trialsIn(long entry) {
+        return Float.intBitsToFloat((int) entry);
     }
 
     /** Trials of {@code key}, 0 when unseen. */
     public double trialsOf(long key) {
-        int s = slots.get(key);
-        return s < 0 ? 0 : trials[s];
+        long e = entries.get(key);
+        return e == ABSENT ? 0 : trialsIn(e);
     }
 
     /** Hits of {@code key}, 0 when unseen. */
     public double hitsOf(long key) {
-        int s = slots.get(key);
-        return s < 0 ? 0 : hits[s];
+        long e = entries.get(key);
+        return e == ABSENT ? 0 : hitsIn(e);
     }
 
     /** Number of distinct tuples. */
@@ -61,20 +70,22 @@ public final class TupleCounts {
         return keys.length;
     }
 
-    public long key(int slot) {
-        return keys[slot];
+    /** The {@code i}-th key in ascending order. */
+    public long key(int i) {
+        return keys[i];
     }
 
-    /** Sum of all trials. */
-    public double totalTrials() {
-        double t = 0;
-        for (double x : trials) t += x;
-        return t;
+    public double hitsAt(int i) {
+        return hitsIn(packed[i]);
     }
 
-    /** Rough heap footprint in bytes: the arrays plus the hash table's own two arrays. */
+    public double trialsAt(int i) {
+        return trialsIn(packed[i]);
+    }
+
+    /** Rough heap footprint in bytes: the sorted arrays plus the hash table's keys, values and states. */
     public long approximateBytes() {
-        return (long) keys.length * (8 + 8 + 8) + (long) slots.capacity() * (8 + 4 + 1);
+        return (long) keys.length * 16 + (long) entries.capacity() * (8 + 8 + 1);
     }
 
     public void write(DataOutput out) throws IOException {
@@ -84,8 +95,7 @@ public final class TupleCounts {
             out.writeLong(k - previous);
             previous = k;
         }
-        for (double h : hits) out.writeDouble(h);
-        for (double t : trials) out.writeDouble(t);
+        for (long e : packed) out.writeLong(e);
     }
 
     public static TupleCounts read(DataInput in) throws IOException {
@@ -97,10 +107,13 @@ public final class TupleCounts {
             previous += in.readLong();
             keys[i] = previous;
         }
-        double[] hits = new double[n];
-        double[] trials = new double[n];
-        for (int i = 0; i < n; i++) hits[i] = in.readDouble();
-        for (int i = 0; i < n; i++) trials[i] = in.readDouble();
-        return new TupleCounts(keys, hits, trials);
+        long[] packed = new long[n];
+        for (int i = 0; i < n; i++) {
+            packed[i] = in.readLong();
+            if (packed[i] == ABSENT || hitsIn(packed[i]) < 0 || trialsIn(packed[i]) < hitsIn(packed[i])) {
+                throw new IOException("count entry " + i + " is not a pair of counts");
+            }
+        }
+        return new TupleCounts(keys, packed);
     }
 }

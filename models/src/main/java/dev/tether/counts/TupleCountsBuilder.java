@@ -27,7 +27,7 @@ public final class TupleCountsBuilder {
 
     /** Adds every entry of {@code other}, with its keys rewritten by {@code keyMap} (for a different vocabulary). */
     public void addAll(TupleCounts other, LongUnaryOperator keyMap) {
-        for (int i = 0; i < other.size(); i++) add(keyMap.applyAsLong(other.key(i)), other.hits(i), other.trials(i));
+        for (int i = 0; i < other.size(); i++) add(keyMap.applyAsLong(other.key(i)), other.hitsAt(i), other.trialsAt(i));
     }
 
     public int size() {
@@ -45,13 +45,11 @@ public final class TupleCountsBuilder {
     public TupleCounts build() {
         long[] k = Arrays.copyOf(keys, size);
         Arrays.sort(k);
-        double[] h = new double[size];
-        double[] t = new double[size];
+        long[] packed = new long[size];
         for (int i = 0; i < size; i++) {
             int s = slots.get(k[i]);
-            h[i] = hits[s];
-            t[i] = trials[s];
+            packed[i] = TupleCounts.pack(hits[s], trials[s]);
         }
-        return new TupleCounts(k, h, t);
+        return new TupleCounts(k, packed);
     }
 }

@@ -44,7 +44,7 @@ import java.util.zip.InflaterInputStream;
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
 public final class ModelFile {
-    public static final int FORMAT_VERSION = 1;
+    public static final int FORMAT_VERSION = 2;
     private static final byte[] MAGIC = "TETHER-MODEL\n".getBytes(StandardCharsets.US_ASCII);
     private static final int DIGEST_BYTES = 32;
     private static final String INFO = "info";

@@ -129,15 +129,15 @@ class QuadrupleCountsBuilderMergeTest {
             for (SubTuple part : SubTuple.values()) {
                 TupleCounts t = c.table(p, part);
                 for (int s = 0; s < t.size(); s++) {
-                    put(m, prep + " " + part + " " + words(words, t.key(s), part.arity()), t.hits(s), t.trials(s));
+                    put(m, prep + " " + part + " " + words(words, t.key(s), part.arity()), t.hitsAt(s), t.trialsAt(s));
                 }
             }
         }
         for (int s = 0; s < c.verbs().size(); s++) {
-            put(m, "(verb) " + words(words, c.verbs().key(s), 1), c.verbs().hits(s), c.verbs().trials(s));
+            put(m, "(verb) " + words(words, c.verbs().key(s), 1), c.verbs().hitsAt(s), c.verbs().trialsAt(s));
         }
         for (int s = 0; s < c.nouns1().size(); s++) {
-            put(m, "(noun1) " + words(words, c.nouns1().key(s), 1), c.nouns1().hits(s), c.nouns1().trials(s));
+            put(m, "(noun1) " + words(words, c.nouns1().key(s), 1), c.nouns1().hitsAt(s), c.nouns1().trialsAt(s));
         }
         return m;
     }
