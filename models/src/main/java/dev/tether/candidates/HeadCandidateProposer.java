@@ -31,7 +31,8 @@ import java.util.List;
  *       "which" and "how" right before the preposition ("which of these", "how about"); adjectives not followed by
  *       their noun; adverbs.</li>
  *   <li>Following heads when the phrase is fronted: no verb before it, or only a participle opening the sentence
- *       ("Based on the log, the engineer replaced ..."), or it opens a clause (after a comma, a coordinator, a relative
+ *       with a phrase of its own ("Based on the log, the engineer replaced ..."; not a log line's subjectless main
+ *       verb: "Tested the alarm on every deck and logged ..."), or it opens a clause (after a comma, a coordinator, a relative
  *       pronoun, a colon, a bracket or another preposition), or its object is a relative "which"/"whom" (the phrase
  *       belongs to the relative clause: "the berth at which the ferry docks"). The following heads are the main verbs
  *       of the next {@value #FOLLOWING_GROUPS} verb groups (a participle clause or a bracket often comes before the
@@ -162,7 +163,10 @@ public final class HeadCandidateProposer {
         int[] after = new int[2 * FOLLOWING_GROUPS + 1];
         HeadClass[] afterClasses = new HeadClass[after.length];
         int following = 0;
-        boolean openingParticiple = verbsBefore == 1 && lastVerb == 0 && kinds[0] == PARTICIPLE;
+        // "Based on the log, ..." opens with a participle clause; "Tested the alarm on every deck" (log style, no
+        // subject) opens with its main verb, which takes an object and does block.
+        boolean openingParticiple = verbsBefore == 1 && lastVerb == 0 && kinds[0] == PARTICIPLE
+                && kinds.length > 1 && (kinds[1] == PREPOSITION || kinds[1] == TO);
         boolean relative = (kinds[object] == WH_PRONOUN || kinds[object] == RELATIVE_DETERMINER);
         if (!verbBefore || p == 0 || opensClause(kinds[p - 1]) || relative || openingParticiple) {
             following = followingHeads(words, kinds, object, after, afterClasses);

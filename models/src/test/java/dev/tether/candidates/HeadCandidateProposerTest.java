@@ -56,6 +56,21 @@ class HeadCandidateProposerTest {
     }
 
     @Test
+    void logLineOpeningWithItsMainVerbProposesNoLaterVerb() {
+        // Log style drops the subject: "Tested" is the main verb and takes an object, so "on every deck" is not a
+        // fronted phrase and the later verb "logged" is no candidate.
+        PrepositionCandidates on = all("Tested/VBN the/DT alarm/NN on/IN every/DT deck/NN and/CC logged/VBD the/DT results/NNS ./.").get(0);
+        assertArrayEquals(new int[]{2, 0}, heads(on), "alarm, Tested");
+    }
+
+    @Test
+    void openingParticipleWithItsOwnPhraseLetsTheMainVerbFollow() {
+        PrepositionCandidates on = all("Based/VBN on/IN the/DT log/NN ,/, the/DT engineer/NN replaced/VBD the/DT gasket/NN ./.").get(0);
+        assertTrue(on.indexOf(7) >= 0, "'replaced' after the participle clause is a candidate: " + on);
+        assertTrue(on.indexOf(0) >= 0, "'Based' itself stays a candidate: " + on);
+    }
+
+    @Test
     void frontedPhraseGetsTheMainVerbThatFollows() {
         PrepositionCandidates in = all("In/IN the/DT morning/NN ,/, the/DT crew/NN had/VBD already/RB checked/VBN the/DT seals/NNS ./.").get(0);
         assertEquals(2, in.object());
