@@ -105,6 +105,7 @@ public final class HeadCandidateProposer {
         int to = Math.min(words.length, index + RIGHT_REACH + 2);
         byte[] kinds = new byte[to - from];
         for (int i = from; i < to; i++) kinds[i - from] = kind(pennTags[i]);
+        if (from == 0) correctOpeningVerb(words, pennTags, kinds);
         String[] windowWords = from == 0 && to == words.length ? words : java.util.Arrays.copyOfRange(words, from, to);
         PrepositionCandidates c = propose(windowWords, kinds, index - from);
         return c == null || from == 0 ? c : shifted(c, from);
@@ -121,10 +122,29 @@ public final class HeadCandidateProposer {
                 c.isQuadruple() ? c.quadrupleVerb() + by : -1, c.isQuadruple() ? c.quadrupleNoun() + by : -1);
     }
 
+    /**
+     * Log lines and headlines drop the subject ("Replaced the impeller ...", "Tested the alarm ..."), and taggers
+     * trained on edited text often tag such a capitalized opening verb as an adjective or a proper noun. A first
+     * word in -ed followed by a determiner, possessive or number is taken as the verb it almost always is.
+     */
+    private static void correctOpeningVerb(String[] words, String[] pennTags, byte[] kinds) {
+        if (kinds.length < 2) return;
+        String w = words[0];
+        String tag = pennTags[0];
+        String next = pennTags[1];
+        boolean misread = "JJ".equals(tag) || "NNP".equals(tag) || "NN".equals(tag) || "VBN".equals(tag);
+        boolean objectFollows = "DT".equals(next) || "PRP$".equals(next) || "CD".equals(next);
+        if (misread && objectFollows && w.length() > 4 && Character.isUpperCase(w.charAt(0))
+                && w.regionMatches(true, w.length() - 2, "ed", 0, 2)) {
+            kinds[0] = VERB;
+        }
+    }
+
     private static byte[] classify(String[] words, String[] pennTags) {
         checkLengths(words, pennTags);
         byte[] kinds = new byte[words.length];
         for (int i = 0; i < kinds.length; i++) kinds[i] = kind(pennTags[i]);
+        correctOpeningVerb(words, pennTags, kinds);
         return kinds;
     }
 

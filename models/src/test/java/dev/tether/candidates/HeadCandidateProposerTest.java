@@ -64,6 +64,17 @@ class HeadCandidateProposerTest {
     }
 
     @Test
+    void capitalizedOpeningVerbMistaggedAsAdjectiveIsStillTheVerb() {
+        // Taggers trained on edited text often read a log line's opening "Tested" as an adjective.
+        PrepositionCandidates on = all("Tested/JJ the/DT alarm/NN on/IN every/DT deck/NN and/CC logged/VBD the/DT results/NNS ./.").get(0);
+        assertArrayEquals(new int[]{2, 0}, heads(on), "alarm, Tested; no later verb");
+        assertEquals(HeadClass.VERB, on.headClass(1));
+        PrepositionCandidates adjective = all("Detailed/JJ reports/NNS on/IN the/DT hull/NN arrived/VBD ./.").get(0);
+        assertTrue(adjective.indexOf(0) < 0 || adjective.headClass(adjective.indexOf(0)) != HeadClass.VERB,
+                "without a determiner after it the opening word keeps its tag: " + adjective);
+    }
+
+    @Test
     void openingParticipleWithItsOwnPhraseLetsTheMainVerbFollow() {
         PrepositionCandidates on = all("Based/VBN on/IN the/DT log/NN ,/, the/DT engineer/NN replaced/VBD the/DT gasket/NN ./.").get(0);
         assertTrue(on.indexOf(7) >= 0, "'replaced' after the participle clause is a candidate: " + on);
