@@ -13,10 +13,12 @@ final class EvidenceText {
         String p = q.preposition();
         String o = q.object();
         String counts = String.format(Locale.ROOT, "the head in %.0f of %.0f training cases", choice.evidenceHits(i), choice.evidenceTrials(i));
+        // The texts below say which counts were read; HEAD pools the head word's counts with its class's counts for
+        // this object, as HeadChoiceScorer does.
         String seen;
         switch (choice.evidence(i)) {
             case HEAD_WITH_OBJECT: seen = "'" + head + " ... " + p + " " + o + "' was " + counts; break;
-            case HEAD: seen = "'" + head + " ... " + p + "' (pooled with any " + cls + " ... " + p + " " + o + ") was " + counts; break;
+            case HEAD: seen = "'" + head + " ... " + p + "', pooled with any " + cls + " ... '" + p + " " + o + "': " + counts; break;
             case CLASS_WITH_OBJECT: seen = "a " + cls + " with '" + p + " " + o + "' was " + counts; break;
             case CLASS: seen = "a " + cls + " with '" + p + "' was " + counts; break;
             default: seen = "no statistic for '" + p + "'; position alone decided"; break;
