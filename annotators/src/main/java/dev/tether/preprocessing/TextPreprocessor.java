@@ -51,6 +51,14 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     /** Resource bundle of this engine's exception messages (UIMA exceptions take their message from a bundle). */
     private static final String MESSAGES = "dev.tether.preprocessing.PreprocessorMessages";
 
+    /**
+     * Whether to write base chunks. Tether's own engines do not read them, and the chunker takes most of the
+     * preprocessing time, so a flow that only needs attachment decisions can switch it off.
+     */
+    public static final String PARAM_CHUNK = "chunk";
+    @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "true")
+    private boolean chunk;
+
     private SentenceDetectorME sentenceDetector;
     private TokenizerME tokenizer;
     private POSTaggerME tagger;
@@ -80,7 +88,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         // PENN: keep the model's own Penn Treebank tags. The default maps them to Universal Dependencies tags, which
         // the 1.5 chunker model was not trained on.
         tagger = new POSTaggerME(models.posModel(), POSTagFormat.PENN);
-        chunker = new ChunkerME(models.chunkerModel());
+        chunker = chunk ? new ChunkerME(models.chunkerModel()) : null;
     }
 
     @Override
@@ -128,11 +136,13 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
             token.addToIndexes();
             written[i] = token;
         }
-        for (Span chunkSpan : chunker.chunkAsSpans(words, tags)) {
-            Chunk chunk = new Chunk(jcas, written[chunkSpan.getStart()].getBegin(),
-                    written[chunkSpan.getEnd() - 1].getEnd());
-            chunk.setLabel(chunkSpan.getType());
-            chunk.addToIndexes();
+        if (chunker != null) {
+            for (Span chunkSpan : chunker.chunkAsSpans(words, tags)) {
+                Chunk chunk = new Chunk(jcas, written[chunkSpan.getStart()].getBegin(),
+                        written[chunkSpan.getEnd() - 1].getEnd());
+                chunk.setLabel(chunkSpan.getType());
+                chunk.addToIndexes();
+            }
         }
         new Sentence(jcas, written[0].getBegin(), written[n - 1].getEnd()).addToIndexes();
         sentencesWritten++;

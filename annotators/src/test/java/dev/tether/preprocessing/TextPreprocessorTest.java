@@ -71,6 +71,25 @@ class TextPreprocessorTest {
     }
 
     @Test
+    void chunkingCanBeSwitchedOffWithoutLosingSentencesOrTags() throws Exception {
+        String text = "The engineer replaced the gasket on the port engine with a spare from the stores. "
+                + "The deckhand checked the bilge pump before departure.";
+        AnalysisEngine withChunks = createEngine(TextPreprocessor.class);
+        AnalysisEngine withoutChunks = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false);
+        JCas a = withChunks.newJCas();
+        a.setDocumentText(text);
+        withChunks.process(a);
+        JCas b = withoutChunks.newJCas();
+        b.setDocumentText(text);
+        withoutChunks.process(b);
+
+        assertTrue(JCasUtil.select(b, Chunk.class).isEmpty());
+        assertEquals(2, JCasUtil.select(b, Sentence.class).size());
+        List<String> tagged = JCasUtil.select(a, Token.class).stream().map(t -> t.getCoveredText() + "/" + t.getPos()).toList();
+        assertEquals(tagged, JCasUtil.select(b, Token.class).stream().map(t -> t.getCoveredText() + "/" + t.getPos()).toList());
+    }
+
+    @Test
     void emptyAndBlankDocumentsProduceNothing() throws Exception {
         AnalysisEngine preprocessor = createEngine(TextPreprocessor.class);
         for (String text : new String[] {"", " \n\t  \n"}) {
