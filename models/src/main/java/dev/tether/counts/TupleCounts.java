@@ -5,6 +5,7 @@ import gnu.trove.map.hash.TLongLongHashMap;
 import java.io.DataInput;
 import java.io.DataOutput;
 import java.io.IOException;
+import java.util.Arrays;
 
 /**
  * An immutable count table: for each packed key, how often the tuple was seen ({@code trials}) and how often with
@@ -101,9 +102,11 @@ public final class TupleCounts {
     public static TupleCounts read(DataInput in) throws IOException {
         int n = in.readInt();
         if (n < 0) throw new IOException("negative table size " + n);
-        long[] keys = new long[n];
+        // Grow while reading rather than trusting n up front: a damaged size must not ask for gigabytes.
+        long[] keys = new long[Math.min(n, 1 << 16)];
         long previous = 0;
         for (int i = 0; i < n; i++) {
+            if (i == keys.length) keys = Arrays.copyOf(keys, (int) Math.min(n, 2L * i));
             previous += in.readLong();
             keys[i] = previous;
         }

@@ -213,8 +213,10 @@ public final class ModelFile {
                 String name = in.readUTF();
                 int size = in.readInt();
                 if (size < 0) throw new IOException("negative section size");
-                byte[] data = new byte[size];
-                in.readFully(data);
+                // Read what is there rather than allocating the claimed size up front: a damaged size must not
+                // ask for gigabytes.
+                byte[] data = in.readNBytes(size);
+                if (data.length < size) throw new EOFException("section '" + name + "' ends early");
                 sections.put(name, data);
             }
         } catch (EOFException e) {
