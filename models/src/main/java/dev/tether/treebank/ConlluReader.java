@@ -3,6 +3,7 @@ package dev.tether.treebank;
 import java.io.BufferedInputStream;
 import java.io.BufferedReader;
 import java.io.Closeable;
+import java.io.EOFException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -15,6 +16,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
+import java.util.zip.ZipException;
 
 /**
  * Streams the sentences of a CoNLL-U file (an open standard: https://universaldependencies.org/format.html), plain or
@@ -45,13 +47,22 @@ public final class ConlluReader implements Closeable {
             raw.mark(2);
             int b0 = raw.read(), b1 = raw.read();
             raw.reset();
-            InputStream body = b0 == 0x1f && b1 == 0x8b ? new GZIPInputStream(raw, 1 << 16) : raw;
+            InputStream body = b0 == 0x1f && b1 == 0x8b ? gunzip(raw, file.toString()) : raw;
             CharsetDecoder utf8 = StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
             return new ConlluReader(new InputStreamReader(body, utf8), file.toString());
         } catch (IOException e) {
             raw.close();
             throw e;
+        }
+    }
+
+    private static InputStream gunzip(InputStream raw, String name) throws IOException {
+        try {
+            return new GZIPInputStream(raw, 1 << 16);
+        } catch (ZipException | EOFException e) {
+            throw new ConlluFormatException(name, 1, "starts like a gzip file, but its gzip header is damaged or cut "
+                    + "short; compress the file again with gzip, or give it uncompressed");
         }
     }
 
@@ -100,6 +111,10 @@ public final class ConlluReader implements Closeable {
             return line;
         } catch (java.nio.charset.CharacterCodingException e) {
             throw error(lineNumber + 1, "not valid UTF-8; CoNLL-U files must be UTF-8 encoded");
+        } catch (ZipException | EOFException e) {
+            // Only the gzip stream throws these: its data is corrupt or cut short.
+            throw error(lineNumber + 1, "the gzip-compressed data is damaged or cut short here (" + e.getMessage()
+                    + "); compress the file again with gzip, or give it uncompressed");
         }
     }
 
@@ -162,6 +177,10 @@ public final class ConlluReader implements Closeable {
                 if (from != expected || to <= from) {
                     throw error(at, "multiword token range " + id + " should start at word " + expected
                             + " and cover at least two words");
+                }
+                if (from <= rangeEnd) {
+                    throw error(at, "multiword token range " + id + " overlaps the range before it, which ends at word "
+                            + rangeEnd + "; list the words of a range before the next range");
                 }
                 addSurface(c[1], from - 1, to - 1, at, c[9]);
                 rangeEnd = to;
