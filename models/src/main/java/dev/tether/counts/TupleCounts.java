@@ -107,13 +107,20 @@ public final class TupleCounts {
         long previous = 0;
         for (int i = 0; i < n; i++) {
             if (i == keys.length) keys = Arrays.copyOf(keys, (int) Math.min(n, 2L * i));
-            previous += in.readLong();
+            long delta = in.readLong();
+            if ((i > 0 && delta <= 0) || previous + delta < 0) {
+                throw new IOException("table key " + i + " is out of order or repeated");
+            }
+            previous += delta;
             keys[i] = previous;
         }
         long[] packed = new long[n];
         for (int i = 0; i < n; i++) {
             packed[i] = in.readLong();
-            if (packed[i] == ABSENT || hitsIn(packed[i]) < 0 || trialsIn(packed[i]) < hitsIn(packed[i])) {
+            double hits = hitsIn(packed[i]);
+            double trials = trialsIn(packed[i]);
+            // Written so that NaN fails too.
+            if (packed[i] == ABSENT || !(hits >= 0) || !(trials >= hits) || Double.isInfinite(trials)) {
                 throw new IOException("count entry " + i + " is not a pair of counts");
             }
         }

@@ -24,6 +24,8 @@ public final class VocabularyCodec {
         if (n < 0 || n > Vocabulary.MAX_SIZE) throw new IOException("vocabulary size " + n + " out of range");
         List<String> words = new ArrayList<>(n);
         for (int i = 0; i < n; i++) words.add(in.readUTF());
-        return Vocabulary.frozenOf(words);
+        Vocabulary v = Vocabulary.frozenOf(words);
+        if (v.size() != n) throw new IOException("the vocabulary repeats a word (" + n + " entries, " + v.size() + " distinct)");
+        return v;
     }
 }
