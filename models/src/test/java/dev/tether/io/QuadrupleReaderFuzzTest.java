@@ -21,7 +21,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * A normal build runs the seeds only, from
  * {@code src/test/resources/dev/tether/io/QuadrupleReaderFuzzTestInputs/readBothWays/}. To fuzz:
  * <pre>
- *   JAZZER_FUZZ=1 mvn -B -o -Dtether.target=target-g -pl models test -Dtest='QuadrupleReaderFuzzTest'
+ *   JAZZER_FUZZ=1 mvn -B -pl models test -Dtest='QuadrupleReaderFuzzTest'
  * </pre>
  */
 class QuadrupleReaderFuzzTest {

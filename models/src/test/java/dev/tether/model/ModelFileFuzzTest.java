@@ -41,7 +41,7 @@ import static org.junit.jupiter.api.Assertions.fail;
  * {@code src/test/resources/dev/tether/model/ModelFileFuzzTestInputs/<method>/}, a tiny model trained by
  * {@link #tinyModel()}, cut to the layer the target fuzzes. To fuzz one target for real (one target per run):
  * <pre>
- *   JAZZER_FUZZ=1 mvn -B -o -Dtether.target=target-g -pl models test -Dtest='ModelFileFuzzTest#uncompressedPayload'
+ *   JAZZER_FUZZ=1 mvn -B -pl models test -Dtest='ModelFileFuzzTest#uncompressedPayload'
  * </pre>
  * It stops after {@code maxDuration} or at the first finding; Jazzer writes the crashing input into the method's
  * Inputs folder, where it becomes a seed of every later build. The generated corpus lands in {@code models/.cifuzz-corpus}

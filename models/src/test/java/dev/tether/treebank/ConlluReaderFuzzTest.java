@@ -21,7 +21,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * {@code src/test/resources/dev/tether/treebank/ConlluReaderFuzzTestInputs/readAll/}, one of them gzip-compressed.
  * A normal build runs the seeds only. To fuzz:
  * <pre>
- *   JAZZER_FUZZ=1 mvn -B -o -Dtether.target=target-g -pl models test -Dtest='ConlluReaderFuzzTest'
+ *   JAZZER_FUZZ=1 mvn -B -pl models test -Dtest='ConlluReaderFuzzTest'
  * </pre>
  */
 class ConlluReaderFuzzTest {
