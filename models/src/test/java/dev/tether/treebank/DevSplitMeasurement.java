@@ -13,7 +13,7 @@ import java.util.Map;
  * One-off measurement on a CoNLL-U file (the development split of UD English EWT): gold attachment count, the
  * nearest-noun-or-verb baseline and the two-way verb/noun ceiling with gold universal tags, and the proposer's
  * candidate recall and size with gold Penn tags. Run by hand:
- * {@code java -cp models/target-b/classes:models/target-b/test-classes dev.tether.treebank.DevSplitMeasurement FILE}.
+ * {@code java -cp models/target/classes:models/target/test-classes:<trove jar> dev.tether.treebank.DevSplitMeasurement FILE}.
  */
 public final class DevSplitMeasurement {
     public static void main(String[] args) throws Exception {
