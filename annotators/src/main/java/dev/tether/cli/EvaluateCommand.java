@@ -89,18 +89,15 @@ final class EvaluateCommand implements Command {
             g.writeStringField("model", model.id());
             g.writeStringField("data", set.name());
             g.writeStringField("scorer", e.mainScorer());
-            g.writeNumberField("n", main.total());
-            g.writeNumberField("correct", main.correct());
-            g.writeNumberField("accuracy", main.value());
-            writeInterval(g, main);
+            AccuracyJson.fields(g, main);
             g.writeNumberField("skipped", set.skipped());
             g.writeNumberField("unknownPrepositions", e.unknownPrepositions());
             g.writeObjectFieldStart("baselines");
-            writeAccuracy(g, ALWAYS_NOUN, e.byScorer().get(ALWAYS_NOUN));
-            writeAccuracy(g, MAJORITY, e.byScorer().get(MAJORITY));
+            AccuracyJson.write(g, ALWAYS_NOUN, e.byScorer().get(ALWAYS_NOUN));
+            AccuracyJson.write(g, MAJORITY, e.byScorer().get(MAJORITY));
             g.writeEndObject();
             g.writeObjectFieldStart("scorers");
-            for (Map.Entry<String, Accuracy> s : e.byScorer().entrySet()) writeAccuracy(g, s.getKey(), s.getValue());
+            for (Map.Entry<String, Accuracy> s : e.byScorer().entrySet()) AccuracyJson.write(g, s.getKey(), s.getValue());
             g.writeEndObject();
             g.writeObjectFieldStart("byLevel");
             for (Map.Entry<DecisionBasis, Accuracy> b : e.byBasis().entrySet()) {
@@ -123,22 +120,5 @@ final class EvaluateCommand implements Command {
             g.writeEndObject();
         }
         out.println();
-    }
-
-    private static void writeAccuracy(JsonGenerator g, String name, Accuracy a) throws IOException {
-        g.writeObjectFieldStart(name);
-        g.writeNumberField("accuracy", a.value());
-        g.writeNumberField("correct", a.correct());
-        g.writeNumberField("n", a.total());
-        writeInterval(g, a);
-        g.writeEndObject();
-    }
-
-    private static void writeInterval(JsonGenerator g, Accuracy a) throws IOException {
-        double[] i = a.interval95();
-        g.writeArrayFieldStart("interval95");
-        g.writeNumber(i[0]);
-        g.writeNumber(i[1]);
-        g.writeEndArray();
     }
 }

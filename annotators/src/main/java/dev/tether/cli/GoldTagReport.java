@@ -38,19 +38,11 @@ final class GoldTagReport {
                 g.writeStringField("tags", "gold");
                 g.writeNumberField("n", a.total());
                 g.writeObjectFieldStart("attachment");
-                g.writeNumberField("accuracy", a.value());
-                g.writeNumberField("correct", a.correct());
-                g.writeNumberField("n", a.total());
+                AccuracyJson.fields(g, a);
                 g.writeNumberField("candidateRecall", e.candidateRecall().value());
                 g.writeEndObject();
                 g.writeObjectFieldStart("baselines");
-                for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) {
-                    g.writeObjectFieldStart(c.getKey());
-                    g.writeNumberField("accuracy", c.getValue().value());
-                    g.writeNumberField("correct", c.getValue().correct());
-                    g.writeNumberField("n", c.getValue().total());
-                    g.writeEndObject();
-                }
+                for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
                 g.writeEndObject();
                 g.writeEndObject();
             }

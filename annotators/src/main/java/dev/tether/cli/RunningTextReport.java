@@ -78,14 +78,13 @@ final class RunningTextReport {
             g.writeNumberField("seconds", e.seconds());
             g.writeNumberField("n", a.total());
             g.writeObjectFieldStart("attachment");
-            writeAccuracyFields(g, a);
+            AccuracyJson.fields(g, a);
             g.writeNumberField("candidateRecall", e.candidateRecall().value());
             g.writeNumberField("missedPrepositions", e.missedPrepositions());
             g.writeNumberField("decisions", e.decisions());
             g.writeObjectFieldStart("byHeadClass");
-            for (Map.Entry<String, Accuracy> c : e.byHeadClass().entrySet()) writeAccuracy(g, c.getKey(), c.getValue());
+            for (Map.Entry<String, Accuracy> c : e.byHeadClass().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
             g.writeEndObject();
-            writeBaselines(g, e);
             g.writeEndObject();
             writeBaselines(g, e);
             g.writeEndObject();
@@ -95,24 +94,7 @@ final class RunningTextReport {
 
     private static void writeBaselines(JsonGenerator g, RunningTextEvaluation e) throws IOException {
         g.writeObjectFieldStart("baselines");
-        for (Map.Entry<String, Accuracy> b : e.baselines().entrySet()) writeAccuracy(g, b.getKey(), b.getValue());
+        for (Map.Entry<String, Accuracy> b : e.baselines().entrySet()) AccuracyJson.write(g, b.getKey(), b.getValue());
         g.writeEndObject();
-    }
-
-    private static void writeAccuracy(JsonGenerator g, String name, Accuracy a) throws IOException {
-        g.writeObjectFieldStart(name);
-        writeAccuracyFields(g, a);
-        g.writeEndObject();
-    }
-
-    private static void writeAccuracyFields(JsonGenerator g, Accuracy a) throws IOException {
-        g.writeNumberField("accuracy", a.value());
-        g.writeNumberField("correct", a.correct());
-        g.writeNumberField("n", a.total());
-        double[] i = a.interval95();
-        g.writeArrayFieldStart("interval95");
-        g.writeNumber(i[0]);
-        g.writeNumber(i[1]);
-        g.writeEndArray();
     }
 }
