@@ -1,0 +1,104 @@
+package dev.tether.ranking;
+
+import org.junit.jupiter.api.Test;
+
+import java.util.Random;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class RankerTrainerTest {
+
+    /**
+     * A separable set: the gold candidate is always the one whose feature 0 is largest, with noise features beside
+     * it. A log-linear model can rank it perfectly.
+     */
+    private static RankingData separable(long seed, int decisions) {
+        Random random = new Random(seed);
+        RankingData data = new RankingData();
+        for (int d = 0; d < decisions; d++) {
+            int n = 2 + random.nextInt(4);
+            double[] signal = new double[n];
+            int gold = 0;
+            for (int c = 0; c < n; c++) {
+                signal[c] = random.nextDouble();
+                if (signal[c] > signal[gold]) gold = c;
+            }
+            data.startDecision(gold, 1);
+            for (int c = 0; c < n; c++) {
+                data.addCandidate();
+                data.addFeature(0, c == gold ? signal[c] + 0.5 : signal[c]);
+                data.addFeature(1 + random.nextInt(3), random.nextGaussian());
+            }
+        }
+        return data.seal();
+    }
+
+    @Test
+    void learnsASeparableToySetPerfectly() {
+        RankingData data = separable(5, 300);
+        RankerTrainer.Result result = new RankerTrainer(new double[] {1e-3}, 1, new Lbfgs(500, 1e-10)).train(data, 4);
+        for (int d = 0; d < data.decisions(); d++) {
+            assertEquals(data.gold(d), RankerTrainer.argmax(result.ranker().probabilities(data, d)), "decision " + d);
+        }
+        assertTrue(result.ranker().weight(0) > 0, "the signal feature gets a positive weight");
+    }
+
+    @Test
+    void strongerL2ShrinksTheWeights() {
+        RankingData data = RankerObjectiveTest.randomData(9, 200, 10);
+        double previous = Double.POSITIVE_INFINITY;
+        for (double l2 : new double[] {0.01, 1, 100, 10000}) {
+            LogLinearRanker r = new RankerTrainer(new double[] {l2}, 1, new Lbfgs(500, 1e-10)).train(data, 10).ranker();
+            double norm = 0;
+            for (int f = 0; f < 10; f++) norm += r.weight(f) * r.weight(f);
+            assertTrue(norm < previous, "norm " + norm + " at L2 " + l2 + " should be below " + previous);
+            previous = norm;
+        }
+        assertTrue(previous < 1e-3, "a very strong penalty drives the weights towards zero: " + previous);
+    }
+
+    @Test
+    void optimumHasAVanishingGradient() {
+        RankingData data = RankerObjectiveTest.randomData(13, 150, 6);
+        LogLinearRanker r = new RankerTrainer(new double[] {0.5}, 1, new Lbfgs(500, 1e-12)).train(data, 6).ranker();
+        double[] g = new double[6];
+        double[] w = new double[6];
+        for (int f = 0; f < 6; f++) w[f] = r.weight(f);
+        new RankerObjective(data, RankerObjectiveTest.all(data), 0.5, 6).valueAndGradient(w, g);
+        for (double x : g) assertEquals(0, x, 1e-4);
+    }
+
+    @Test
+    void trainingIsDeterministicAndCrossValidationReportsEveryStrength() {
+        RankingData data = RankerObjectiveTest.randomData(21, 120, 8);
+        RankerTrainer trainer = new RankerTrainer(new double[] {0.1, 1, 10}, 4, new Lbfgs(300, 1e-9));
+        RankerTrainer.Result a = trainer.train(data, 8);
+        RankerTrainer.Result b = trainer.train(data, 8);
+        assertEquals(a.ranker(), b.ranker());
+        assertEquals(3, a.trials().size());
+        assertTrue(a.trials().stream().anyMatch(t -> t.l2() == a.l2()));
+        double[] wa = new double[8];
+        for (int f = 0; f < 8; f++) wa[f] = a.ranker().weight(f);
+        double[] wb = new double[8];
+        for (int f = 0; f < 8; f++) wb[f] = b.ranker().weight(f);
+        assertArrayEquals(wa, wb, 0.0);
+    }
+
+    @Test
+    void badInputIsRefused() {
+        RankingData empty = new RankingData();
+        assertThrows(IllegalArgumentException.class, () -> new RankerTrainer().train(empty, 3));
+        RankingData data = new RankingData();
+        data.startDecision(0, 1);
+        data.addCandidate();
+        assertThrows(IllegalArgumentException.class, () -> data.addFeature(0, Double.NaN));
+        assertThrows(IllegalArgumentException.class, () -> data.addFeature(0, Double.POSITIVE_INFINITY));
+        RankingData goldOutside = new RankingData();
+        goldOutside.startDecision(3, 1);
+        goldOutside.addCandidate();
+        assertThrows(IllegalStateException.class, goldOutside::seal);
+    }
+}
