@@ -51,8 +51,8 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
     private ModelHolder sharedModel;
 
     private TetherModel model;
-    private HeadChoiceScorer scorer;
     private long decisions;
+    private long withoutCandidates;
     private long documents;
 
     @Override
@@ -68,8 +68,8 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
             throw new ResourceInitializationException(new IOException("cannot load the model given by parameter "
                     + PARAM_MODEL + ": " + e.getMessage(), e));
         }
-        scorer = model.headChoiceScorer();
-        getLogger().log(Level.CONFIG, "attachment resolver uses model " + model.id());
+        getLogger().log(Level.CONFIG, "attachment resolver uses model " + model.id()
+                + (model.attachmentRanker().isPresent() ? " (learned ranker)" : " (count-based score: the model has no ranker)"));
     }
 
     /** The model this instance scores with (instances share it). */
@@ -83,34 +83,44 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
         List<AttachmentAmbiguity> ambiguities = new ArrayList<>(JCasUtil.select(jcas, AttachmentAmbiguity.class));
         for (AttachmentAmbiguity a : ambiguities) {
             FSArray<?> candidates = a.getCandidates();
-            if (candidates == null || candidates.size() == 0) continue;
+            if (candidates == null || candidates.size() == 0) {
+                // The finder marks a preposition with no plausible head (a fragment such as "About the ferry.");
+                // there is nothing to choose, so no decision is written, and the summary counts it.
+                withoutCandidates++;
+                continue;
+            }
             AttachmentQuery query = query(a);
-            HeadChoice choice = scorer.choose(query);
+            HeadChoice choice = model.chooseHead(query);
             write(jcas, a, query, choice);
             decisions++;
         }
     }
 
-    static AttachmentQuery query(AttachmentAmbiguity a) {
+    /** The query an ambiguity asks (its candidates, tags, distances and punctuation), as the resolver scores it. */
+    public static AttachmentQuery query(AttachmentAmbiguity a) {
         FSArray<?> candidates = a.getCandidates();
         StringArray classes = a.getCandidateClasses();
         IntegerArray distances = a.getCandidateDistances();
+        StringArray tags = a.getCandidateTags();
         int n = candidates.size();
-        String[] heads = new String[n];
-        HeadClass[] headClasses = new HeadClass[n];
-        int[] d = new int[n];
-        boolean[] punctuated = new boolean[n];
         Annotation preposition = a.getPreposition();
         String text = preposition.getCAS().getDocumentText();
+        AttachmentQuery.Builder b = AttachmentQuery.builder(preposition.getCoveredText(),
+                a.getObject() != null ? a.getObject().getCoveredText() : "")
+                .objectTag(a.getObjectTag() != null ? a.getObjectTag() : "");
+        int verb = -1;
+        int noun = -1;
         for (int i = 0; i < n; i++) {
             Annotation head = (Annotation) candidates.get(i);
-            heads[i] = head.getCoveredText();
-            headClasses[i] = HeadClass.valueOf(classes.get(i).toUpperCase(Locale.ROOT));
-            d[i] = distances != null ? distances.get(i) : i + 1;
-            punctuated[i] = hasBreak(text, Math.min(head.getEnd(), preposition.getEnd()), Math.max(head.getBegin(), preposition.getBegin()));
+            String tag = tags != null && tags.get(i) != null ? tags.get(i) : "";
+            b.candidate(head.getCoveredText(), tag, HeadClass.valueOf(classes.get(i).toUpperCase(Locale.ROOT)),
+                    distances != null ? distances.get(i) : i + 1,
+                    hasBreak(text, Math.min(head.getEnd(), preposition.getEnd()), Math.max(head.getBegin(), preposition.getBegin())));
+            if (head == a.getQuadrupleVerb()) verb = i;
+            if (head == a.getQuadrupleNoun()) noun = i;
         }
-        String object = a.getObject() != null ? a.getObject().getCoveredText() : "";
-        return new AttachmentQuery(preposition.getCoveredText(), object, heads, headClasses, d, punctuated);
+        if (verb >= 0 && noun >= 0) b.quadruple(verb, noun);
+        return b.build();
     }
 
     /** Whether the text between two tokens holds a phrase break, as {@link AttachmentQuery#isBreak} defines it. */
@@ -148,15 +158,15 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
         d.setRanking(ranking);
         d.setEvidenceLevel(choice.evidence(best).label());
         d.setEvidenceCounts(String.format(Locale.ROOT, "%.0f/%.0f", choice.evidenceHits(best), choice.evidenceTrials(best)));
-        d.setEvidence(EvidenceText.describe(q, choice, best));
+        d.setEvidence(EvidenceText.describe(model, q, choice, best));
         d.setModelId(model.id());
         d.addToIndexes();
     }
 
     @Override
     public void collectionProcessComplete() throws AnalysisEngineProcessException {
-        getLogger().log(Level.INFO, String.format(Locale.ROOT, "attachment resolver: %,d decisions in %,d documents (model %s)",
-                decisions, documents, model.id()));
+        getLogger().log(Level.INFO, String.format(Locale.ROOT, "attachment resolver: %,d decisions in %,d documents (model %s); "
+                + "%,d prepositions had no candidate head", decisions, documents, model.id(), withoutCandidates));
         super.collectionProcessComplete();
     }
 }

@@ -1,29 +1,41 @@
 package dev.tether.attachment;
 
+import dev.tether.model.TetherModel;
+
 import java.util.Locale;
 
-/** Says in words which statistic spoke for a chosen head, for reviewers. */
+/** Says in words why a head was chosen, for reviewers. */
 final class EvidenceText {
+    /** Features named per decision: the ones that weighed most for the chosen head against the runner-up. */
+    static final int REASONS = 3;
+
     private EvidenceText() {
     }
 
-    static String describe(AttachmentQuery q, HeadChoice choice, int i) {
+    static String describe(TetherModel model, AttachmentQuery q, HeadChoice choice, int i) {
+        String counts = countEvidence(q, choice, i);
+        if (model.attachmentRanker().isEmpty()) {
+            return String.format(Locale.ROOT, "%s (%s, p=%.2f, margin %.2f over the runner-up)", counts,
+                    q.headClass(i).label(), choice.probability(i), choice.margin());
+        }
+        AttachmentRanker ranker = model.attachmentRanker().get();
+        return AttachmentRanker.sentence(q, choice, ranker.explain(q, choice, REASONS)) + ". Counts: " + counts;
+    }
+
+    /** Which count statistic spoke for candidate {@code i}, with its counts. */
+    private static String countEvidence(AttachmentQuery q, HeadChoice choice, int i) {
         String head = q.head(i);
         String cls = q.headClass(i).label();
         String p = q.preposition();
         String o = q.object();
         String counts = String.format(Locale.ROOT, "the head in %.0f of %.0f training cases", choice.evidenceHits(i), choice.evidenceTrials(i));
-        // The texts below say which counts were read; HEAD pools the head word's counts with its class's counts for
-        // this object, as HeadChoiceScorer does.
-        String seen;
+        // HEAD pools the head word's counts with its class's counts for this object, as HeadChoiceScorer does.
         switch (choice.evidence(i)) {
-            case HEAD_WITH_OBJECT: seen = "'" + head + " ... " + p + " " + o + "' was " + counts; break;
-            case HEAD: seen = "'" + head + " ... " + p + "', pooled with any " + cls + " ... '" + p + " " + o + "': " + counts; break;
-            case CLASS_WITH_OBJECT: seen = "a " + cls + " with '" + p + " " + o + "' was " + counts; break;
-            case CLASS: seen = "a " + cls + " with '" + p + "' was " + counts; break;
-            default: seen = "no statistic for '" + p + "'; position alone decided"; break;
+            case HEAD_WITH_OBJECT: return "'" + head + " ... " + p + " " + o + "' was " + counts;
+            case HEAD: return "'" + head + " ... " + p + "', pooled with any " + cls + " ... '" + p + " " + o + "': " + counts;
+            case CLASS_WITH_OBJECT: return "a " + cls + " with '" + p + " " + o + "' was " + counts;
+            case CLASS: return "a " + cls + " with '" + p + "' was " + counts;
+            default: return "no statistic for '" + p + "'; position alone decided";
         }
-        return String.format(Locale.ROOT, "%s (%s, p=%.2f, margin %.2f over the runner-up)", seen, cls,
-                choice.probability(i), choice.margin());
     }
 }

@@ -193,11 +193,11 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         }
         tally.tokens += n;
         for (PrepositionCandidates found : proposer.proposeAll(words, tags)) {
-            write(jcas, tokens, found);
+            write(jcas, tokens, tags, found);
         }
     }
 
-    private void write(JCas jcas, List<AnnotationFS> tokens, PrepositionCandidates found) {
+    private void write(JCas jcas, List<AnnotationFS> tokens, String[] tags, PrepositionCandidates found) {
         Annotation preposition = (Annotation) tokens.get(found.preposition());
         Annotation object = (Annotation) tokens.get(found.object());
         AttachmentAmbiguity ambiguity = new AttachmentAmbiguity(jcas,
@@ -207,14 +207,18 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         FSArray<Annotation> candidates = new FSArray<>(jcas, found.size());
         StringArray classes = new StringArray(jcas, found.size());
         IntegerArray distances = new IntegerArray(jcas, found.size());
+        StringArray candidateTags = new StringArray(jcas, found.size());
         for (int i = 0; i < found.size(); i++) {
             candidates.set(i, (Annotation) tokens.get(found.head(i)));
             classes.set(i, found.headClass(i).label());
             distances.set(i, found.preposition() - found.head(i));
+            candidateTags.set(i, tags[found.head(i)]);
         }
         ambiguity.setCandidates(candidates);
         ambiguity.setCandidateClasses(classes);
         ambiguity.setCandidateDistances(distances);
+        ambiguity.setCandidateTags(candidateTags);
+        ambiguity.setObjectTag(tags[found.object()]);
         if (found.isQuadruple()) {
             Annotation verb = (Annotation) tokens.get(found.quadrupleVerb());
             Annotation noun1 = (Annotation) tokens.get(found.quadrupleNoun());

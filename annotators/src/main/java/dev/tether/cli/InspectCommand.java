@@ -57,6 +57,7 @@ final class InspectCommand implements Command {
         out.printf("  head                 %,10d%n", h.distinct(HeadChoiceCounts.Part.HEAD));
         out.printf("  class with object    %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS_OBJECT));
         out.printf("  class                %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS));
+        RankerSummary.print(m, out);
         out.printf("approximate heap of the count tables: %.1f MB%n", (q.approximateBytes() + h.approximateBytes()) / 1e6);
         return Tether.OK;
     }

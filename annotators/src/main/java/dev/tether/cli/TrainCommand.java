@@ -70,7 +70,10 @@ final class TrainCommand implements Command {
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
+        long start = System.nanoTime();
         TetherModel model = trainer.build();
+        out.printf("built the model in %.1f s%n", (System.nanoTime() - start) / 1e9);
+        RankerSummary.print(model, out);
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");

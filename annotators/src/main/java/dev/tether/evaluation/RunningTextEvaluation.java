@@ -15,6 +15,9 @@ public final class RunningTextEvaluation {
     /** Baseline: the backed-off quadruple model, choosing only between the nearest verb and the nearest noun. */
     public static final String VERB_OR_FIRST_NOUN = "verb-or-first-noun";
 
+    /** Baseline: the count-based head-choice score that the learned ranker replaced, on the pipeline's candidates. */
+    public static final String COUNT_SCORE = "count-score";
+
     final Accuracy attachment = new Accuracy();
     final Accuracy candidateRecall = new Accuracy();
     final Map<String, Accuracy> byHeadClass = new LinkedHashMap<>();
@@ -27,6 +30,7 @@ public final class RunningTextEvaluation {
 
     RunningTextEvaluation() {
         for (String c : new String[] {"verb", "noun", "adjective", "adverb", "other"}) byHeadClass.put(c, new Accuracy());
+        baselines.put(COUNT_SCORE, new Accuracy());
         baselines.put(NEAREST_NOUN_OR_VERB, new Accuracy());
         baselines.put(VERB_OR_FIRST_NOUN, new Accuracy());
     }

@@ -1,5 +1,6 @@
 package dev.tether.evaluation;
 
+import dev.tether.attachment.AttachmentResolver;
 import dev.tether.attachment.AttachmentSite;
 import dev.tether.attachment.BackedOffScorer;
 import dev.tether.attachment.QuadrupleDecision;
@@ -125,6 +126,12 @@ public final class RunningTextEvaluator {
             binaryRight = binaryChoice >= 0 && overlaps((Annotation) candidates.get(binaryChoice), hb, he);
         }
         result.candidateRecall.add(covered);
+        boolean countRight = false;
+        if (ambiguity != null && ambiguity.getCandidates().size() > 0) {
+            int c = model.headChoiceScorer().choose(AttachmentResolver.query(ambiguity)).best();
+            countRight = c >= 0 && overlaps((Annotation) ambiguity.getCandidates().get(c), hb, he);
+        }
+        result.baselines.get(RunningTextEvaluation.COUNT_SCORE).add(countRight);
         result.baselines.get(RunningTextEvaluation.NEAREST_NOUN_OR_VERB).add(nearestRight);
         result.baselines.get(RunningTextEvaluation.VERB_OR_FIRST_NOUN).add(binaryRight);
     }

@@ -40,6 +40,12 @@ public final class HeadChoice {
         this.second = s;
     }
 
+    /** The same candidates and evidence with other probabilities (for example a ranker's). */
+    HeadChoice withProbabilities(double[] p) {
+        if (p.length != probabilities.length) throw new IllegalArgumentException(p.length + " probabilities for " + probabilities.length + " candidates");
+        return new HeadChoice(p, evidence, hits, trials);
+    }
+
     public int size() { return probabilities.length; }
     /** Index of the most probable candidate, -1 when there are none. */
     public int best() { return best; }

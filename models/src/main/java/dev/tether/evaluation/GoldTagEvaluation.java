@@ -13,6 +13,8 @@ public final class GoldTagEvaluation {
     public static final String NEAREST_NOUN_OR_VERB = "nearest-noun-or-verb";
     /** Baseline: the backed-off quadruple model choosing between the nearest verb and the nearest noun. */
     public static final String VERB_OR_FIRST_NOUN = "verb-or-first-noun";
+    /** Baseline: the count-based head-choice score that the learned ranker replaced, on the same candidates. */
+    public static final String COUNT_SCORE = "count-score";
     /** Not a method: how often the gold head is the nearest verb or the nearest noun before the preposition. */
     public static final String VERB_OR_NOUN_CEILING = "verb-or-noun-ceiling";
 
@@ -21,6 +23,7 @@ public final class GoldTagEvaluation {
     final Map<String, Accuracy> comparisons = new LinkedHashMap<>();
 
     GoldTagEvaluation() {
+        comparisons.put(COUNT_SCORE, new Accuracy());
         comparisons.put(NEAREST_NOUN_OR_VERB, new Accuracy());
         comparisons.put(VERB_OR_FIRST_NOUN, new Accuracy());
         comparisons.put(VERB_OR_NOUN_CEILING, new Accuracy());

@@ -19,7 +19,8 @@ public final class GoldTagEvaluator {
             AttachmentQuery q = e.query();
             int gold = e.gold();
             result.candidateRecall.add(gold >= 0);
-            result.attachment.add(gold >= 0 && scorer.choose(q).best() == gold);
+            result.attachment.add(gold >= 0 && model.chooseHead(q).best() == gold);
+            result.comparisons.get(GoldTagEvaluation.COUNT_SCORE).add(gold >= 0 && scorer.choose(q).best() == gold);
             int nearest = -1;
             int verb = -1;
             int noun = -1;

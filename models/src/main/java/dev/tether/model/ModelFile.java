@@ -1,5 +1,6 @@
 package dev.tether.model;
 
+import dev.tether.attachment.AttachmentRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.Sha256;
@@ -38,8 +39,9 @@ import java.util.zip.InflaterInputStream;
  *   payload                   deflate-compressed sections: count, then per section its name, length and bytes
  *   SHA-256                   32 bytes over everything before it
  * </pre>
- * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts) and
- * {@code head-choice} (the counts for choosing among all candidate heads); a reader
+ * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
+ * {@code head-choice} (the counts for choosing among all candidate heads) and, when the model has one,
+ * {@code attachment-ranker} (its own version, feature families, feature keys and weights); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -50,13 +52,15 @@ public final class ModelFile {
     private static final String INFO = "info";
     private static final String QUADRUPLES = "quadruples";
     private static final String HEAD_CHOICE = "head-choice";
+    private static final String ATTACHMENT_RANKER = "attachment-ranker";
 
     private ModelFile() {
     }
 
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
-        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
+        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
+                model.attachmentRanker().orElse(null));
         Path folder = target.toAbsolutePath().getParent();
         if (folder != null) Files.createDirectories(folder);
         if (Files.isDirectory(target)) {
@@ -103,7 +107,7 @@ public final class ModelFile {
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                         HeadChoiceCounts headChoice) throws IOException {
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -118,6 +122,9 @@ public final class ModelFile {
         }));
         sections.put(QUADRUPLES, section(quadruples::write));
         sections.put(HEAD_CHOICE, section(headChoice::write));
+        if (ranker != null) {
+            sections.put(ATTACHMENT_RANKER, section(out -> AttachmentRanker.write(ranker.weights(), ranker.families(), out)));
+        }
 
         ByteArrayOutputStream payload = new ByteArrayOutputStream();
         Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);
@@ -190,7 +197,22 @@ public final class ModelFile {
             }
             QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
             HeadChoiceCounts headChoice = HeadChoiceCounts.read(new DataInputStream(new ByteArrayInputStream(heads)));
-            return new TetherModel(normalizer, sources, counts, headChoice, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+            AttachmentRanker ranker = null;
+            byte[] rankerBytes = sections.get(ATTACHMENT_RANKER);
+            if (rankerBytes != null) {
+                DataInputStream r = new DataInputStream(new ByteArrayInputStream(rankerBytes));
+                int rankerVersion = r.readInt();
+                if (rankerVersion != AttachmentRanker.VERSION) {
+                    throw new ModelFormatException(name + " has an attachment ranker of version " + rankerVersion
+                            + "; this build of Tether reads version " + AttachmentRanker.VERSION
+                            + ". Retrain the model with this version ('tether train').");
+                }
+                ranker = AttachmentRanker.read(new DataInputStream(new ByteArrayInputStream(rankerBytes)), headChoice, counts,
+                        new dev.tether.vocabulary.WordNormalizer());
+            }
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+        } catch (ModelFormatException e) {
+            throw e;
         } catch (IOException | RuntimeException e) {
             throw new ModelFormatException(name + " is damaged: its content cannot be read (" + e.getMessage()
                     + "); copy or train it again", e);

@@ -1,35 +1,63 @@
 package dev.tether.model;
 
 import dev.tether.attachment.AttachmentExample;
+import dev.tether.attachment.AttachmentFeatureExtractor;
+import dev.tether.attachment.AttachmentFeatureFamily;
 import dev.tether.attachment.AttachmentQuery;
+import dev.tether.attachment.AttachmentRanker;
+import dev.tether.attachment.AttachmentRankerTrainer;
+import dev.tether.attachment.AttachmentSite;
 import dev.tether.attachment.CandidateStructure;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.attachment.LabelledQuadruple;
+import dev.tether.attachment.Quadruple;
 import dev.tether.candidates.HeadClass;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
-import dev.tether.attachment.Quadruple;
-import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
+import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.io.QuadrupleSet;
+import dev.tether.ranking.RankerModel;
+import dev.tether.ranking.RankerTrainer;
 import dev.tether.treebank.TreebankExamples;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 
 /**
  * Builds a new {@link TetherModel} from training sources. Sources are counted in the order they are added, so the
  * same sources in the same order always give a byte-identical model file. A trainer is single-use and not
  * thread-safe; the model it builds is immutable.
+ *
+ * <p>When head-choice examples (from treebanks) are among the sources, {@link #build} also trains the attachment
+ * ranker. The count statistics that become an example's features are a jackknife over {@value #JACKKNIFE_FOLDS}
+ * contiguous folds of the examples: an example's features are read from counts of everything except its own fold
+ * (labelled quadruples and base models always count), so the ranker sees counts as they are for text it was not
+ * trained on. The shipped model's own counts come from all the data.
  */
 public final class ModelTrainer {
+    /** Folds of the jackknife that gives training examples their count features. */
+    public static final int JACKKNIFE_FOLDS = 5;
+
     private final WordNormalizer normalizer = new WordNormalizer();
     private final QuadrupleCountsBuilder quadruples = new QuadrupleCountsBuilder();
     private final HeadChoiceCountsBuilder headChoice = new HeadChoiceCountsBuilder();
     private final List<ModelSource> sources = new ArrayList<>();
+    // What the jackknife replays per fold: counts that always count, and the examples with their quadruples.
+    private final List<TetherModel> baseModels = new ArrayList<>();
+    private final List<LabelledQuadruple> fixedQuadruples = new ArrayList<>();
+    private final List<AttachmentExample> examples = new ArrayList<>();
+    private final List<LabelledQuadruple> exampleQuadruples = new ArrayList<>();
+    private Set<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
+    private RankerTrainer rankerTrainer = new RankerTrainer();
+    private boolean rankerWanted = true;
 
     /** Counts every quadruple of {@code set}. */
     public ModelTrainer addQuadruples(QuadrupleSet set) {
@@ -44,22 +72,33 @@ public final class ModelTrainer {
      * counts, since a bare quadruple says nothing about positions in a sentence.
      */
     public void addQuadruple(LabelledQuadruple lq) {
+        fixedQuadruples.add(lq);
+        countQuadruple(lq, quadruples, headChoice);
+    }
+
+    private void countQuadruple(LabelledQuadruple lq, QuadrupleCountsBuilder q4, HeadChoiceCountsBuilder heads) {
         Quadruple q = lq.quadruple();
         String v = normalizer.verb(q.verb());
         String n1 = normalizer.noun(q.noun1());
         String p = normalizer.preposition(q.preposition());
         String n2 = normalizer.noun(q.noun2());
-        quadruples.add(v, n1, p, n2, lq.site(), 1.0);
-        headChoice.addLexical(p, v, HeadClass.VERB.ordinal(), n2, lq.site() == dev.tether.attachment.AttachmentSite.VERB, 1.0);
-        headChoice.addLexical(p, n1, HeadClass.NOUN.ordinal(), n2, lq.site() == dev.tether.attachment.AttachmentSite.NOUN, 1.0);
+        q4.add(v, n1, p, n2, lq.site(), 1.0);
+        heads.addLexical(p, v, HeadClass.VERB.ordinal(), n2, lq.site() == AttachmentSite.VERB, 1.0);
+        heads.addLexical(p, n1, HeadClass.NOUN.ordinal(), n2, lq.site() == AttachmentSite.NOUN, 1.0);
     }
 
     /**
      * Counts one head-choice example: every candidate is a trial of its lexical and structural keys, the gold one a
-     * hit. An example whose gold head is not among its candidates teaches nothing and is not counted.
+     * hit. An example whose gold head is not among its candidates teaches nothing and is not counted. The example
+     * also trains the attachment ranker.
      */
     public void addExample(AttachmentExample example) {
         if (example.gold() < 0) return;
+        examples.add(example);
+        countExample(example, headChoice);
+    }
+
+    private void countExample(AttachmentExample example, HeadChoiceCountsBuilder heads) {
         AttachmentQuery q = example.query();
         String p = normalizer.preposition(q.preposition());
         String o = normalizer.noun(q.object());
@@ -67,8 +106,8 @@ public final class ModelTrainer {
         for (int i = 0; i < q.size(); i++) {
             HeadClass c = q.headClass(i);
             boolean hit = i == example.gold();
-            headChoice.addLexical(p, HeadChoiceScorer.headKey(normalizer, q.head(i), c), c.ordinal(), o, hit, 1.0);
-            headChoice.addStructure(structure[i], hit, 1.0);
+            heads.addLexical(p, HeadChoiceScorer.headKey(normalizer, q.head(i), c), c.ordinal(), o, hit, 1.0);
+            heads.addStructure(structure[i], hit, 1.0);
         }
     }
 
@@ -78,6 +117,7 @@ public final class ModelTrainer {
             throw new IllegalArgumentException(name + " was counted with normalization " + model.normalizerVersion()
                     + ", this build uses " + WordNormalizer.VERSION + "; retrain it from its sources");
         }
+        baseModels.add(model);
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
@@ -90,19 +130,83 @@ public final class ModelTrainer {
      */
     public ModelTrainer addTreebank(TreebankExamples treebank, String name, String sha256) {
         for (AttachmentExample e : treebank.examples()) addExample(e);
-        for (LabelledQuadruple q : treebank.quadruples()) addQuadruple(q);
+        for (LabelledQuadruple q : treebank.quadruples()) {
+            exampleQuadruples.add(q);
+            countQuadruple(q, quadruples, headChoice);
+        }
         sources.add(new ModelSource(name, "treebank", treebank.examples().size(), 0, sha256));
+        return this;
+    }
+
+    /** The feature families the ranker uses (all by default); fewer for ablation. */
+    public ModelTrainer rankerFamilies(Set<AttachmentFeatureFamily> chosen) {
+        if (chosen.isEmpty()) throw new IllegalArgumentException("the ranker needs at least one feature family");
+        this.families = EnumSet.copyOf(chosen);
+        return this;
+    }
+
+    /** Replaces the ranker's trainer (L2 strengths, folds, optimizer). */
+    public ModelTrainer rankerTrainer(RankerTrainer trainer) {
+        this.rankerTrainer = trainer;
+        return this;
+    }
+
+    /** Whether to train a ranker when there are examples (default yes); without one the count score decides. */
+    public ModelTrainer trainRanker(boolean wanted) {
+        this.rankerWanted = wanted;
         return this;
     }
 
     public TetherModel build() {
         QuadrupleCounts counts = quadruples.build();
         HeadChoiceCounts heads = headChoice.build();
+        AttachmentRanker ranker = null;
+        if (rankerWanted && !examples.isEmpty()) {
+            ranker = new AttachmentRanker(trainRanker(heads), families, heads, counts, normalizer);
+        } else if (rankerWanted) {
+            // No examples of its own: keep the ranker of the (last) base model that has one, over the new counts.
+            for (TetherModel base : baseModels) {
+                if (base.attachmentRanker().isPresent()) {
+                    AttachmentRanker r = base.attachmentRanker().get();
+                    ranker = new AttachmentRanker(r.weights(), r.families(), heads, counts, normalizer);
+                }
+            }
+        }
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ModelFile.fingerprint(encoded));
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }
+    }
+
+    private RankerModel trainRanker(HeadChoiceCounts lexicon) {
+        int n = examples.size();
+        int k = Math.min(JACKKNIFE_FOLDS, n);
+        Map<String, Integer> foldOfSource = new HashMap<>();
+        int[] fold = new int[n];
+        for (int j = 0; j < n; j++) {
+            fold[j] = (int) ((long) k * j / n);
+            foldOfSource.put(examples.get(j).source(), fold[j]);
+        }
+        AttachmentRankerTrainer events = new AttachmentRankerTrainer();
+        int next = 0;
+        for (int f = 0; f < k; f++) {
+            QuadrupleCountsBuilder q4 = new QuadrupleCountsBuilder();
+            HeadChoiceCountsBuilder hc = new HeadChoiceCountsBuilder();
+            for (TetherModel base : baseModels) {
+                q4.addAll(base.quadruples());
+                hc.addAll(base.headChoice());
+            }
+            for (LabelledQuadruple q : fixedQuadruples) countQuadruple(q, q4, hc);
+            for (int j = 0; j < n; j++) if (fold[j] != f) countExample(examples.get(j), hc);
+            for (LabelledQuadruple q : exampleQuadruples) {
+                Integer of = foldOfSource.get(q.source());
+                if (of == null || of != f) countQuadruple(q, q4, hc);
+            }
+            AttachmentFeatureExtractor extractor = new AttachmentFeatureExtractor(hc.build(), q4.build(), lexicon, normalizer, families);
+            for (; next < n && fold[next] == f; next++) events.add(examples.get(next), 1.0, extractor);
+        }
+        return events.train(rankerTrainer);
     }
 }

@@ -1,5 +1,8 @@
 package dev.tether.model;
 
+import dev.tether.attachment.AttachmentQuery;
+import dev.tether.attachment.AttachmentRanker;
+import dev.tether.attachment.HeadChoice;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
@@ -9,6 +12,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A trained model: the counts the scorers read, the normalization they were counted under, and where they came
@@ -29,23 +33,32 @@ public final class TetherModel {
     private final String id;
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
+    private final AttachmentRanker attachmentRanker;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                HeadChoiceCounts headChoice, String id) {
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, String id) {
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
         this.headChoice = headChoice;
         this.id = id;
         this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
+        this.attachmentRanker = attachmentRanker;
     }
 
     public String normalizerVersion() { return normalizerVersion; }
     public List<ModelSource> sources() { return sources; }
     public QuadrupleCounts quadruples() { return quadruples; }
     public HeadChoiceCounts headChoice() { return headChoice; }
-    /** The scorer that chooses among all candidate heads, built once with the model. */
+    /** The count-based scorer that chooses among all candidate heads (the baseline of the ranker), built once with the model. */
     public HeadChoiceScorer headChoiceScorer() { return headChoiceScorer; }
+    /** The learned attachment ranker, present when the model was trained with head-choice examples. */
+    public Optional<AttachmentRanker> attachmentRanker() { return Optional.ofNullable(attachmentRanker); }
+
+    /** The model's head choice: the ranker's when it has one, else the count-based score's. */
+    public HeadChoice chooseHead(AttachmentQuery q) {
+        return attachmentRanker != null ? attachmentRanker.choose(q) : headChoiceScorer.choose(q);
+    }
     public WordNormalizer normalizer() { return normalizer; }
 
     /** A short fingerprint of the model's content (the start of its checksum), recorded with every decision. */

@@ -12,15 +12,22 @@ import java.util.List;
  */
 public final class RankerTrainer {
     /** Default L2 strengths tried, in order. */
-    public static final double[] DEFAULT_STRENGTHS = {0.1, 0.3, 1, 3, 10};
+    public static final double[] DEFAULT_STRENGTHS = {1, 3, 10, 30};
     public static final int DEFAULT_FOLDS = 5;
 
     private final double[] strengths;
     private final int folds;
     private final Lbfgs optimizer;
+    private int threads = Math.min(2, Runtime.getRuntime().availableProcessors());
 
     public RankerTrainer() {
         this(DEFAULT_STRENGTHS, DEFAULT_FOLDS, new Lbfgs(400, 1e-7));
+    }
+
+    /** How many fits run at once during cross-validation; the result does not depend on it. */
+    public RankerTrainer threads(int n) {
+        this.threads = Math.max(1, n);
+        return this;
     }
 
     public RankerTrainer(double[] strengths, int folds, Lbfgs optimizer) {
@@ -47,31 +54,48 @@ public final class RankerTrainer {
         double chosen = strengths[0];
         if (strengths.length > 1) {
             int k = Math.min(folds, n);
-            double bestLoss = Double.POSITIVE_INFINITY;
-            for (double l2 : strengths) {
-                double loss = 0;
-                double weight = 0;
-                double right = 0;
-                for (int f = 0; f < k; f++) {
-                    int from = (int) ((long) n * f / k);
-                    int to = (int) ((long) n * (f + 1) / k);
-                    LogLinearRanker r = fit(data, range(0, from, to, n), l2, dimension).ranker;
-                    for (int d = from; d < to; d++) {
-                        double[] p = r.probabilities(data, d);
-                        double c = data.weight(d);
-                        loss -= c * Math.log(Math.max(p[data.gold(d)], 1e-300));
-                        weight += c;
-                        if (argmax(p) == data.gold(d)) right += c;
+            // Every (strength, fold) fit is independent and deterministic, so they may run in parallel; the
+            // held-out sums are then added in a fixed order.
+            double[][][] heldOut = new double[strengths.length][k][];
+            java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads);
+            try {
+                List<java.util.concurrent.Future<double[]>> futures = new ArrayList<>();
+                for (double l2 : strengths) {
+                    for (int f = 0; f < k; f++) {
+                        int from = (int) ((long) n * f / k);
+                        int to = (int) ((long) n * (f + 1) / k);
+                        futures.add(pool.submit(() -> heldOut(data, fit(data, range(from, to, n), l2, dimension).ranker, from, to)));
                     }
                 }
-                trials.add(new Trial(l2, loss / weight, right / weight));
+                for (int s = 0; s < strengths.length; s++) {
+                    for (int f = 0; f < k; f++) heldOut[s][f] = futures.get(s * k + f).get();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("ranker training was interrupted", e);
+            } catch (java.util.concurrent.ExecutionException e) {
+                throw new IllegalStateException("ranker training failed: " + e.getCause().getMessage(), e.getCause());
+            } finally {
+                pool.shutdownNow();
+            }
+            double bestLoss = Double.POSITIVE_INFINITY;
+            for (int s = 0; s < strengths.length; s++) {
+                double loss = 0;
+                double right = 0;
+                double weight = 0;
+                for (int f = 0; f < k; f++) {
+                    loss += heldOut[s][f][0];
+                    right += heldOut[s][f][1];
+                    weight += heldOut[s][f][2];
+                }
+                trials.add(new Trial(strengths[s], loss / weight, right / weight));
                 if (loss < bestLoss) {
                     bestLoss = loss;
-                    chosen = l2;
+                    chosen = strengths[s];
                 }
             }
         }
-        Fit all = fit(data, range(0, 0, 0, n), chosen, dimension);
+        Fit all = fit(data, range(0, 0, n), chosen, dimension);
         return new Result(all.ranker, chosen, trials, all.iterations);
     }
 
@@ -85,11 +109,26 @@ public final class RankerTrainer {
     }
 
     /** Decisions {@code 0..n-1} without {@code [from, to)}. */
-    private static int[] range(int start, int from, int to, int n) {
+    private static int[] range(int from, int to, int n) {
         int[] out = new int[n - (to - from)];
         int k = 0;
-        for (int d = start; d < n; d++) if (d < from || d >= to) out[k++] = d;
+        for (int d = 0; d < n; d++) if (d < from || d >= to) out[k++] = d;
         return Arrays.copyOf(out, k);
+    }
+
+    /** Weighted log-loss, weighted right answers and total weight of decisions {@code [from, to)}. */
+    private static double[] heldOut(RankingData data, LogLinearRanker r, int from, int to) {
+        double loss = 0;
+        double right = 0;
+        double weight = 0;
+        for (int d = from; d < to; d++) {
+            double[] p = r.probabilities(data, d);
+            double c = data.weight(d);
+            loss -= c * Math.log(Math.max(p[data.gold(d)], 1e-300));
+            weight += c;
+            if (argmax(p) == data.gold(d)) right += c;
+        }
+        return new double[] {loss, right, weight};
     }
 
     /** Index of the largest value; the first on ties (candidates are ordered nearest first). */

@@ -51,7 +51,7 @@ public final class TreebankExampleExtractor {
                 continue;
             }
             String source = s.location(g.preposition());
-            out.addExample(new AttachmentExample(AttachmentQuery.of(words, c), c.indexOf(g.head()), source));
+            out.addExample(new AttachmentExample(AttachmentQuery.of(words, tags, c), c.indexOf(g.head()), source));
             if (c.isQuadruple() && c.object() >= 0) {
                 AttachmentSite site = g.head() == c.quadrupleVerb() ? AttachmentSite.VERB
                         : g.head() == c.quadrupleNoun() ? AttachmentSite.NOUN : null;

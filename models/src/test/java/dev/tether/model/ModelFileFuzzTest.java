@@ -168,14 +168,15 @@ class ModelFileFuzzTest {
         trainer.addQuadruple(lq("replaced", "seal", "on", "pump", AttachmentSite.NOUN));
         trainer.addQuadruple(lq("moored", "ferry", "at", "pier", AttachmentSite.VERB));
         trainer.addQuadruple(lq("painted", "deck", "with", "primer", AttachmentSite.VERB));
-        trainer.addExample(new AttachmentExample(new AttachmentQuery("on", "pump",
-                new String[] {"replaced", "seal"}, new HeadClass[] {HeadClass.VERB, HeadClass.NOUN},
-                new int[] {2, 1}, new boolean[] {false, false}), 1, "tiny:1"));
-        trainer.addExample(new AttachmentExample(new AttachmentQuery("with", "primer",
-                new String[] {"painted", "deck", "fresh"}, new HeadClass[] {HeadClass.VERB, HeadClass.NOUN, HeadClass.ADJECTIVE},
-                new int[] {3, 1, 2}, new boolean[] {false, false, true}), 0, "tiny:2"));
+        trainer.addExample(new AttachmentExample(AttachmentQuery.builder("on", "pump").objectTag("NN")
+                .candidate("replaced", "VBD", HeadClass.VERB, 2, false).candidate("seal", "NN", HeadClass.NOUN, 1, false)
+                .quadruple(0, 1).build(), 1, "tiny:1"));
+        trainer.addExample(new AttachmentExample(AttachmentQuery.builder("with", "primer").objectTag("NN")
+                .candidate("painted", "VBD", HeadClass.VERB, 3, false).candidate("deck", "NN", HeadClass.NOUN, 1, false)
+                .candidate("fresh", "JJ", HeadClass.ADJECTIVE, 2, true).build(), 0, "tiny:2"));
         TetherModel model = trainer.build();
-        return ModelFile.encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
+        return ModelFile.encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
+                model.attachmentRanker().orElse(null));
     }
 
     private static LabelledQuadruple lq(String v, String n1, String p, String n2, AttachmentSite site) {

@@ -1,0 +1,33 @@
+package dev.tether.cli;
+
+import dev.tether.attachment.AttachmentFeatureFamily;
+import dev.tether.attachment.AttachmentRanker;
+import dev.tether.model.ModelTrainer;
+import dev.tether.model.TetherModel;
+import dev.tether.ranking.RankerModel;
+import dev.tether.ranking.RankerTrainer;
+
+import java.io.PrintStream;
+import java.util.stream.Collectors;
+
+/** Prints what a model's attachment ranker is: its training decisions, features and the cross-validated L2 choice. */
+final class RankerSummary {
+    private RankerSummary() {
+    }
+
+    static void print(TetherModel model, PrintStream out) {
+        if (model.attachmentRanker().isEmpty()) {
+            out.println("attachment ranker  none: the count-based score chooses heads (train with --conllu to get one)");
+            return;
+        }
+        AttachmentRanker r = model.attachmentRanker().get();
+        RankerModel w = r.weights();
+        out.printf("attachment ranker  %,d training decisions (count features from a %d-fold jackknife), %,d features, L2 %s%n",
+                w.decisions(), ModelTrainer.JACKKNIFE_FOLDS, w.size(), w.l2());
+        out.println("  feature families  " + r.families().stream().map(AttachmentFeatureFamily::label).collect(Collectors.joining(", ")));
+        for (RankerTrainer.Trial t : w.trials()) {
+            out.printf("  cross-validated L2 %-8s log-loss %.4f  accuracy %.4f%s%n", t.l2(), t.logLoss(), t.accuracy(),
+                    t.l2() == w.l2() ? "  <- chosen" : "");
+        }
+    }
+}

@@ -1,0 +1,213 @@
+package dev.tether.attachment;
+
+import dev.tether.candidates.HeadClass;
+import dev.tether.counts.HeadChoiceCounts;
+import dev.tether.counts.HeadChoiceCounts.Part;
+import dev.tether.counts.QuadrupleCounts;
+import dev.tether.counts.StructureKey;
+import dev.tether.counts.TupleCounts;
+import dev.tether.counts.TupleKey;
+import dev.tether.ranking.CandidateFeatures;
+import dev.tether.vocabulary.PennTags;
+import dev.tether.vocabulary.Vocabulary;
+import dev.tether.vocabulary.WordNormalizer;
+
+import java.util.EnumSet;
+import java.util.Set;
+
+/**
+ * Turns an {@link AttachmentQuery} into the ranker's features, one sparse vector per candidate (templates in
+ * {@link AttachmentFeature}). Count statistics are read from {@code statistics}; word identities (head word,
+ * preposition) are keyed by the ids of {@code lexicon}. At run time both are the model's own counts; at training the
+ * statistics of a treebank event come from the counts of the other folds (a jackknife), so the ranker learns how far
+ * to trust counts on words it has not seen, while the identities stay those of the whole model. Immutable and
+ * thread-safe; the per-decision work uses integer ids and the caller's reusable buffer.
+ */
+public final class AttachmentFeatureExtractor {
+    private static final Part[] PARTS = Part.values();
+    private static final double CLIP = 8;
+
+    private final HeadChoiceCounts statistics;
+    private final HeadChoiceCounts lexicon;
+    private final QuadrupleCounts quadruples;
+    private final WordNormalizer normalizer;
+    private final HeadChoiceScorer countScorer;
+    private final BackedOffScorer backedOff;
+    private final LexicalAssociationScorer association;
+    private final boolean[] on = new boolean[AttachmentFeatureFamily.values().length];
+    private final String[] lightVerbKeys = new String[AttachmentFeature.LIGHT_VERBS.length];
+
+    public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
+                                      WordNormalizer normalizer, Set<AttachmentFeatureFamily> families) {
+        this.statistics = statistics;
+        this.lexicon = lexicon;
+        this.quadruples = quadruples;
+        this.normalizer = normalizer;
+        this.countScorer = new HeadChoiceScorer(statistics, normalizer, 1.0, 1.0);
+        this.backedOff = new BackedOffScorer(quadruples);
+        this.association = new LexicalAssociationScorer(quadruples);
+        for (AttachmentFeatureFamily f : families) on[f.ordinal()] = true;
+        for (int i = 1; i < lightVerbKeys.length; i++) lightVerbKeys[i] = normalizer.verb(AttachmentFeature.LIGHT_VERBS[i]);
+    }
+
+    public Set<AttachmentFeatureFamily> families() {
+        EnumSet<AttachmentFeatureFamily> s = EnumSet.noneOf(AttachmentFeatureFamily.class);
+        for (AttachmentFeatureFamily f : AttachmentFeatureFamily.values()) if (on[f.ordinal()]) s.add(f);
+        return s;
+    }
+
+    /** The count-based choice (today's scorer) on the same statistics, for the evidence and as a baseline. */
+    public HeadChoice countChoice(AttachmentQuery q) {
+        return countScorer.choose(q);
+    }
+
+    /**
+     * Fills {@code out} with the features of every candidate of {@code q}; {@code base} is {@link #countChoice} of
+     * the same query.
+     */
+    public void extract(AttachmentQuery q, HeadChoice base, CandidateFeatures out) {
+        out.reset();
+        int n = q.size();
+        String prepositionKey = normalizer.preposition(q.preposition());
+        String objectKey = normalizer.noun(q.object());
+        Vocabulary words = statistics.words();
+        int p = statistics.prepositions().id(prepositionKey);
+        int o = words.id(objectKey);
+        int lp = lexicon.prepositions().id(prepositionKey);
+        int lo = lexicon.words().id(objectKey);
+        int objectKind = objectKind(q.objectTag());
+        long[] structure = CandidateStructure.keys(q);
+
+        double quadrupleNoun = Double.NaN;
+        int quadrupleBasis = 0;
+        double la = Double.NaN;
+        if (q.quadrupleVerb() >= 0 && q.quadrupleNoun() >= 0 && (on(AttachmentFeatureFamily.BACKED_OFF) || on(AttachmentFeatureFamily.ASSOCIATION))) {
+            int[] ids = quadruples.encode(normalizer, q.head(q.quadrupleVerb()), q.head(q.quadrupleNoun()), q.preposition(), q.object());
+            QuadrupleDecision d = backedOff.decide(ids[0], ids[1], ids[2], ids[3]);
+            quadrupleNoun = d.nounProbability();
+            quadrupleBasis = d.basis().ordinal();
+            double s = association.decide(ids[0], ids[1], ids[2], ids[3]).score();
+            la = Math.max(-CLIP, Math.min(CLIP, s));
+        }
+
+        int[] seenOfClass = new int[HeadClass.values().length];
+        for (int i = 0; i < n; i++) {
+            out.nextCandidate();
+            HeadClass hc = q.headClass(i);
+            int c = hc.ordinal();
+            int rank = seenOfClass[c]++;
+            String headKey = HeadChoiceScorer.headKey(normalizer, q.head(i), hc);
+            if (on(AttachmentFeatureFamily.COUNT_SCORE)) {
+                out.add(AttachmentFeature.COUNT_SCORE_LOG.key(0, 0, c), Math.max(-20, Math.log(base.probability(i))));
+                out.add(AttachmentFeature.COUNT_LEVEL.key(base.evidence(i).ordinal(), 0, c), 1);
+            }
+            if (on(AttachmentFeatureFamily.BACKED_OFF)) {
+                int h = words.id(headKey);
+                for (Part part : PARTS) {
+                    long entry = lookup(part, p, h, c, o);
+                    if (entry == TupleCounts.ABSENT) {
+                        out.add(AttachmentFeature.LEVEL_UNSEEN.key(part.ordinal(), 0, c), 1);
+                    } else {
+                        double hits = TupleCounts.hitsIn(entry);
+                        double trials = TupleCounts.trialsIn(entry);
+                        out.add(AttachmentFeature.LEVEL_LOG_ODDS.key(part.ordinal(), 0, c), Math.log((hits + 0.5) / (trials - hits + 0.5)));
+                        out.add(AttachmentFeature.LEVEL_TRIALS.key(part.ordinal(), 0, c), Math.log1p(trials));
+                    }
+                }
+                long se = statistics.structure().find(structure[i]);
+                if (se != TupleCounts.ABSENT) {
+                    double hits = TupleCounts.hitsIn(se);
+                    double trials = TupleCounts.trialsIn(se);
+                    out.add(AttachmentFeature.STRUCTURE_LOG_ODDS.key(0, 0, c), Math.log((hits + 0.5) / (trials - hits + 0.5)));
+                }
+            }
+            int side = i == q.quadrupleVerb() ? 0 : i == q.quadrupleNoun() ? 1 : -1;
+            if (side >= 0 && !Double.isNaN(quadrupleNoun)) {
+                if (on(AttachmentFeatureFamily.BACKED_OFF)) {
+                    double pn = Math.max(1e-3, Math.min(1 - 1e-3, quadrupleNoun));
+                    double logit = Math.log(pn / (1 - pn));
+                    out.add(AttachmentFeature.QUADRUPLE_ESTIMATE.key(quadrupleBasis, side, 0), side == 1 ? logit : -logit);
+                }
+                if (on(AttachmentFeatureFamily.ASSOCIATION)) {
+                    out.add(AttachmentFeature.ASSOCIATION_SCORE.key(side, 0, 0), side == 0 ? la : -la);
+                }
+            }
+            if (on(AttachmentFeatureFamily.CLASS_PREPOSITION)) {
+                out.add(AttachmentFeature.CLASS_WITH_PREPOSITION.key(lp, 0, c), 1);
+                if (rank == 0) out.add(AttachmentFeature.NEAREST_OF_CLASS.key(lp, 0, c), 1);
+                out.add(AttachmentFeature.PREPOSITION_DISTANCE.key(lp, StructureKey.distanceBucket(q.distance(i)), c), 1);
+            }
+            if (on(AttachmentFeatureFamily.POSITION)) {
+                out.add(AttachmentFeature.DISTANCE.key(StructureKey.distanceBucket(q.distance(i)), 0, c), 1);
+                out.add(AttachmentFeature.RANK_IN_CLASS.key(Math.min(rank, 3), 0, c), 1);
+                long s = structure[i];
+                out.add(AttachmentFeature.STRUCTURE.key(TupleKey.part(s, 3, 0), TupleKey.part(s, 3, 1), TupleKey.part(s, 3, 2)), 1);
+                if (q.distance(i) <= 0) out.add(AttachmentFeature.AFTER_PHRASE.key(0, 0, c), 1);
+            }
+            if (on(AttachmentFeatureFamily.PUNCTUATION) && q.punctuated(i)) {
+                out.add(AttachmentFeature.PUNCTUATION_BETWEEN.key(i == 0 ? 1 : 0, 0, c), 1);
+            }
+            int tag = PennTags.id(q.tag(i));
+            if (on(AttachmentFeatureFamily.TAGS)) {
+                out.add(AttachmentFeature.CANDIDATE_TAG.key(tag, 0, c), 1);
+                out.add(AttachmentFeature.OBJECT_TAG.key(PennTags.id(q.objectTag()), 0, c), 1);
+                out.add(AttachmentFeature.PREPOSITION_TAG.key(lp, tag, 0), 1);
+            }
+            if (on(AttachmentFeatureFamily.LIGHT_VERBS) && hc == HeadClass.VERB) {
+                int light = lightVerb(headKey);
+                if (light > 0) {
+                    out.add(AttachmentFeature.LIGHT_VERB.key(light, 0, 0), 1);
+                    out.add(AttachmentFeature.LIGHT_VERB.key(light, lp, 0), 1);
+                }
+            }
+            if (on(AttachmentFeatureFamily.PRONOUN_PROPER)) {
+                String t = q.tag(i);
+                int kind = t.startsWith("PRP") || t.equals("WP") || t.equals("WDT") ? 1 : t.startsWith("NNP") ? 2 : 0;
+                if (kind > 0) {
+                    out.add(AttachmentFeature.PRONOUN_OR_NAME.key(kind, 0, 0), 1);
+                    out.add(AttachmentFeature.PRONOUN_OR_NAME.key(kind, lp, 0), 1);
+                }
+            }
+            if (on(AttachmentFeatureFamily.HEAD_WORDS)) {
+                int lh = lexicon.words().id(headKey);
+                if (lh > 0) out.add(AttachmentFeature.HEAD_WORD.key(lh, lp, c), 1);
+            }
+            if (on(AttachmentFeatureFamily.OBJECT_CLASS)) {
+                out.add(AttachmentFeature.OBJECT_KIND.key(objectKind, 0, c), 1);
+                out.add(AttachmentFeature.OBJECT_KIND_WITH_PREPOSITION.key(objectKind, lp, c), 1);
+                if (lo > 0) out.add(AttachmentFeature.OBJECT_WORD.key(lo, lp, c), 1);
+            }
+        }
+    }
+
+    private boolean on(AttachmentFeatureFamily f) {
+        return on[f.ordinal()];
+    }
+
+    private long lookup(Part part, int p, int h, int c, int o) {
+        if (p <= 0) return TupleCounts.ABSENT;
+        TupleCounts t = statistics.lexical(p, part);
+        switch (part) {
+            case HEAD_OBJECT: return h > 0 && o > 0 ? t.find(TupleKey.of(h, c + 1, o)) : TupleCounts.ABSENT;
+            case HEAD: return h > 0 ? t.find(TupleKey.of(h, c + 1)) : TupleCounts.ABSENT;
+            case CLASS_OBJECT: return o > 0 ? t.find(TupleKey.of(c + 1, o)) : TupleCounts.ABSENT;
+            default: return t.find(TupleKey.of(c + 1));
+        }
+    }
+
+    private int lightVerb(String verbKey) {
+        for (int i = 1; i < lightVerbKeys.length; i++) if (lightVerbKeys[i].equals(verbKey)) return i;
+        return 0;
+    }
+
+    /** Index into {@link AttachmentFeature#OBJECT_KINDS} for the object's Penn tag. */
+    static int objectKind(String tag) {
+        if (tag.startsWith("PRP")) return 1;
+        if (tag.startsWith("NNP")) return 2;
+        if (tag.equals("CD")) return 3;
+        if (tag.equals("VBG")) return 4;
+        if (tag.startsWith("W")) return 5;
+        if (tag.startsWith("NN")) return 6;
+        return 0;
+    }
+}
