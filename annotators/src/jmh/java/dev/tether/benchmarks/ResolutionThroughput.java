@@ -32,7 +32,8 @@ import java.util.concurrent.TimeUnit;
 
 /**
  * Time to run, on one thread, over the same documents: the candidate finder plus the attachment resolver alone on
- * CASes tagged beforehand ({@link #finderAndResolver}), and the whole standalone pipeline from raw text
+ * CASes tagged beforehand ({@link #finderAndResolver}), the same with the count-based score in place of the learned
+ * ranker ({@link #finderAndCountScore}), and the whole standalone pipeline from raw text
  * ({@link #wholePipeline}). Documents are the {@code # text} sentences of a UD English EWT file, 20 per document.
  * Each invocation processes every document once; {@link ResolutionThroughputMain} turns the times into tokens per
  * second and the finder-plus-resolver share of the whole.
@@ -49,6 +50,7 @@ public class ResolutionThroughput {
     private final List<JCas> tagged = new ArrayList<>();
     private JCas scratch;
     private AnalysisEngine resolution;
+    private AnalysisEngine countResolution;
     private AnalysisEngine whole;
     /** Tokens over all documents, as the built-in preprocessing tokenizes them. */
     public long tokens;
@@ -71,6 +73,7 @@ public class ResolutionThroughput {
         if (inDoc > 0) texts.add(doc.toString());
         AnalysisEngine preprocessor = AnalysisEngineFactory.createEngine(TextPreprocessor.class);
         resolution = AnalysisEngineFactory.createEngine(TetherPipeline.resolution("default"));
+        countResolution = AnalysisEngineFactory.createEngine(TetherPipeline.resolution("default", "counts"));
         whole = TetherPipeline.createForRawText("default");
         for (String text : texts) {
             JCas jcas = preprocessor.newJCas();
@@ -100,6 +103,18 @@ public class ResolutionThroughput {
         return decisions;
     }
 
+    /** The same with the count-based score instead of the learned ranker (the ranker's baseline). */
+    @Benchmark
+    public int finderAndCountScore() throws Exception {
+        int decisions = 0;
+        for (JCas jcas : tagged) {
+            removeOutputs(jcas);
+            countResolution.process(jcas);
+            decisions += JCasUtil.select(jcas, AttachmentDecision.class).size();
+        }
+        return decisions;
+    }
+
     @Benchmark
     public int wholePipeline() throws Exception {
         int decisions = 0;
@@ -122,6 +137,7 @@ public class ResolutionThroughput {
     @TearDown(Level.Trial)
     public void tearDown() {
         resolution.destroy();
+        countResolution.destroy();
         whole.destroy();
     }
 }

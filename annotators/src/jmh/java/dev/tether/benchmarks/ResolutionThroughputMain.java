@@ -22,15 +22,19 @@ public final class ResolutionThroughputMain {
                 .include(ResolutionThroughput.class.getSimpleName()).threads(1).build()).run();
         double resolutionMs = Double.NaN;
         double wholeMs = Double.NaN;
+        double countMs = Double.NaN;
         for (RunResult r : results) {
             String name = r.getParams().getBenchmark();
             double ms = r.getPrimaryResult().getScore();
             if (name.endsWith("finderAndResolver")) resolutionMs = ms;
             if (name.endsWith("wholePipeline")) wholeMs = ms;
+            if (name.endsWith("finderAndCountScore")) countMs = ms;
         }
         long tokens = countTokens(args);
         System.out.printf("%ntokens per pass: %,d%n", tokens);
         System.out.printf("finder + resolver: %.1f ms per pass = %,.0f tokens/s (one thread)%n", resolutionMs, tokens / (resolutionMs / 1000));
+        System.out.printf("finder + count score: %.1f ms per pass = %,.0f tokens/s (one thread); ranker/count-score time %.2f%n",
+                countMs, tokens / (countMs / 1000), resolutionMs / countMs);
         System.out.printf("whole pipeline:    %.1f ms per pass = %,.0f tokens/s (one thread)%n", wholeMs, tokens / (wholeMs / 1000));
         System.out.printf("finder + resolver share of the whole pipeline: %.1f%%%n", 100 * resolutionMs / wholeMs);
     }

@@ -45,12 +45,21 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_RANKING_SIZE, mandatory = false, defaultValue = "5")
     private int rankingSize;
 
+    /**
+     * How heads are chosen: {@code auto} (the model's learned ranker when it has one, else the count-based score) or
+     * {@code counts} (always the count-based score, the ranker's baseline).
+     */
+    public static final String PARAM_SCORER = "scorer";
+    @ConfigurationParameter(name = PARAM_SCORER, mandatory = false, defaultValue = "auto")
+    private String scorerName;
+
     /** Key of the optional shared model resource ({@link ModelHolder}). */
     public static final String RES_MODEL = "sharedModel";
     @ExternalResource(key = RES_MODEL, mandatory = false)
     private ModelHolder sharedModel;
 
     private TetherModel model;
+    private boolean countsOnly;
     private long decisions;
     private long withoutCandidates;
     private long documents;
@@ -62,6 +71,11 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
             throw new ResourceInitializationException(new IllegalArgumentException(
                     "parameter " + PARAM_RANKING_SIZE + " must be at least 1, got " + rankingSize));
         }
+        if (!scorerName.equals("auto") && !scorerName.equals("counts")) {
+            throw new ResourceInitializationException(new IllegalArgumentException(
+                    "parameter " + PARAM_SCORER + " must be 'auto' or 'counts', got '" + scorerName + "'"));
+        }
+        countsOnly = scorerName.equals("counts");
         try {
             model = sharedModel != null ? sharedModel.model() : LoadedModels.get(modelLocation);
         } catch (IOException e) {
@@ -90,7 +104,7 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
                 continue;
             }
             AttachmentQuery query = query(a);
-            HeadChoice choice = model.chooseHead(query);
+            HeadChoice choice = countsOnly ? model.headChoiceScorer().choose(query) : model.chooseHead(query);
             write(jcas, a, query, choice);
             decisions++;
         }
@@ -158,7 +172,7 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
         d.setRanking(ranking);
         d.setEvidenceLevel(choice.evidence(best).label());
         d.setEvidenceCounts(String.format(Locale.ROOT, "%.0f/%.0f", choice.evidenceHits(best), choice.evidenceTrials(best)));
-        d.setEvidence(EvidenceText.describe(model, q, choice, best));
+        d.setEvidence(EvidenceText.describe(countsOnly ? null : model.attachmentRanker().orElse(null), q, choice, best));
         d.setModelId(model.id());
         d.addToIndexes();
     }

@@ -1,7 +1,5 @@
 package dev.tether.attachment;
 
-import dev.tether.model.TetherModel;
-
 import java.util.Locale;
 
 /** Says in words why a head was chosen, for reviewers. */
@@ -12,13 +10,13 @@ final class EvidenceText {
     private EvidenceText() {
     }
 
-    static String describe(TetherModel model, AttachmentQuery q, HeadChoice choice, int i) {
+    /** Why candidate {@code i} was chosen; {@code ranker} is null when the count-based score chose. */
+    static String describe(AttachmentRanker ranker, AttachmentQuery q, HeadChoice choice, int i) {
         String counts = countEvidence(q, choice, i);
-        if (model.attachmentRanker().isEmpty()) {
+        if (ranker == null) {
             return String.format(Locale.ROOT, "%s (%s, p=%.2f, margin %.2f over the runner-up)", counts,
                     q.headClass(i).label(), choice.probability(i), choice.margin());
         }
-        AttachmentRanker ranker = model.attachmentRanker().get();
         return AttachmentRanker.sentence(q, choice, ranker.explain(q, choice, REASONS)) + ". Counts: " + counts;
     }
 

@@ -1,5 +1,6 @@
 package dev.tether.cli;
 
+import dev.tether.attachment.AttachmentFeatureFamily;
 import dev.tether.candidates.HeadCandidateProposer;
 import dev.tether.io.QuadrupleReader;
 import dev.tether.io.Sha256;
@@ -18,6 +19,7 @@ import java.util.HexFormat;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 
@@ -30,12 +32,14 @@ final class TrainCommand implements Command {
 
     @Override
     public String usage() {
-        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed] --out MODEL";
+        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed]"
+                + " [--ranker-without FAMILY...] [--no-ranker] --out MODEL";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out"), Set.of("skip-malformed"));
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out", "ranker-without"),
+                Set.of("skip-malformed", "no-ranker"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu")) {
             throw new UsageException("give at least one training source with --quadruples or --conllu");
@@ -52,7 +56,26 @@ final class TrainCommand implements Command {
             treebanks.add(extractor.extract(file));
         }
 
-        ModelTrainer trainer = new ModelTrainer();
+        ModelTrainer trainer = new ModelTrainer().trainRanker(!a.has("no-ranker"));
+        if (a.has("ranker-without")) {
+            EnumSet<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
+            for (String name : a.values("ranker-without")) {
+                try {
+                    families.remove(AttachmentFeatureFamily.byLabel(name));
+                } catch (IllegalArgumentException e) {
+                    throw new UsageException("--ranker-without: " + e.getMessage());
+                }
+            }
+            if (families.isEmpty()) throw new UsageException("--ranker-without leaves the ranker no feature family");
+            trainer.rankerFamilies(families);
+        }
+        int usableEvents = 0;
+        for (TreebankExamples t : treebanks) usableEvents += t.goldAmongCandidates();
+        if (!treebanks.isEmpty() && usableEvents == 0) {
+            throw new IOException(String.join(", ", a.values("conllu")) + ": no usable attachment events (no gold "
+                    + "prepositional attachment whose head is among the candidates); check that the files are CoNLL-U with "
+                    + "Penn Treebank tags in column 5 and case/obl/nmod relations");
+        }
         String base = a.value("base", null);
         if (base != null) trainer.addModel(ModelLocator.load(base), ModelLocator.DEFAULT.equals(base) ? "default" : Path.of(base).getFileName().toString());
         long skipped = 0;

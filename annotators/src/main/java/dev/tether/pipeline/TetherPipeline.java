@@ -30,6 +30,14 @@ public final class TetherPipeline {
                 AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model));
     }
 
+    /** Like {@link #resolution(String)}, the resolver set to the given {@link AttachmentResolver#PARAM_SCORER}. */
+    public static AnalysisEngineDescription resolution(String model, String scorer) throws ResourceInitializationException {
+        return AnalysisEngineFactory.createEngineDescription(
+                AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model,
+                        AttachmentResolver.PARAM_SCORER, scorer));
+    }
+
     public static AnalysisEngine createForRawText(String model) throws ResourceInitializationException {
         return AnalysisEngineFactory.createEngine(forRawText(model));
     }

@@ -108,6 +108,12 @@ public final class ModelFile {
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker) throws IOException {
+        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker));
+    }
+
+    /** The named sections of a model, in file order. */
+    static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                                        HeadChoiceCounts headChoice, AttachmentRanker ranker) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -125,7 +131,11 @@ public final class ModelFile {
         if (ranker != null) {
             sections.put(ATTACHMENT_RANKER, section(out -> AttachmentRanker.write(ranker.weights(), ranker.families(), out)));
         }
+        return sections;
+    }
 
+    /** A whole file of the current format version holding {@code sections}. */
+    static byte[] pack(Map<String, byte[]> sections) throws IOException {
         ByteArrayOutputStream payload = new ByteArrayOutputStream();
         Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);
         try (DataOutputStream out = new DataOutputStream(new DeflaterOutputStream(payload, deflater, 1 << 16))) {

@@ -55,25 +55,31 @@ class EwtDevSliceEndToEndTest {
     }
 
     /*
-     * Floors. Measured with the shipped default model (December 2026, after its retraining for the punctuation-aware
-     * structural key): attachment 416 of 547 = 0.761 (Wilson 95% interval 0.723-0.794), nearest noun-or-verb 344 =
-     * 0.629, verb-or-first-noun 345 = 0.631, candidate recall 511 = 0.934; by gold head class verb 174/232 = 0.750,
-     * noun 213/275 = 0.775. (The default model before that retraining gave 415 = 0.759.) The run is deterministic, so
-     * the floors guard against regressions, not against sampling: each sits a few points (about one and a half to two
-     * standard errors of a proportion at this n, common practice for a regression floor) below the measured value, so
-     * a retrained model that differs by what 547 items cannot tell apart still passes, and a real loss does not.
+     * Floors. Measured with the shipped default model and its learned ranker (December 2026): attachment 440 of 547
+     * = 0.804 (Wilson 95% interval 0.769-0.836); in the same run the count-based score the ranker replaced 418 =
+     * 0.764, nearest noun-or-verb 344 = 0.629, verb-or-first-noun 345 = 0.631, candidate recall 522 = 0.954. (Before
+     * the ranker the default model measured 416 = 0.761.) The run is deterministic, so the floors guard against
+     * regressions, not against sampling: each sits about two standard errors of a proportion at this n (common
+     * practice for a regression floor) below the measured value, so a retrained model that differs by what 547
+     * items cannot tell apart still passes, and a real loss does not.
      */
 
-    /** 0.761 measured; 0.73 lets 16 decisions (2.9 points, about 1.6 standard errors) go, inside the 95% interval. */
-    private static final double ACCURACY_FLOOR = 0.73;
+    /** 0.804 measured; 0.77 lets 19 decisions (3.4 points, about 2 standard errors) go, inside the 95% interval. */
+    private static final double ACCURACY_FLOOR = 0.77;
     /**
-     * 13.2 points measured over nearest-noun-or-verb (13.0 over verb-or-first-noun). The standard error of a
+     * 17.6 points measured over nearest-noun-or-verb (17.4 over verb-or-first-noun). The standard error of a
      * difference of two proportions near these values at n = 547 is at most 2.8 points even treated as unpaired
-     * (paired items make it smaller), so 1.96 of them is 5.4 points: a margin of 8 points keeps the gain clearly
-     * beyond chance while leaving room for retraining. (The issue's target of 10 points is set on the whole dev split.)
+     * (paired items make it smaller), so 1.96 of them is 5.4 points: a margin of 10 points (the issue's target on
+     * the whole dev split) keeps the gain clearly beyond chance while leaving room for retraining.
      */
-    private static final double MARGIN_OVER_BASELINES = 0.08;
-    /** 0.934 measured (0.954 with gold tags, see EwtDevSliceCandidateRecallTest); 0.92 is 8 heads (1.4 SE) lower. */
+    private static final double MARGIN_OVER_BASELINES = 0.10;
+    /**
+     * 4.0 points measured over the count-based score on the same candidates. Both choose among the same candidates,
+     * so the comparison is paired and its spread is that of the decisions where they differ; retraining has moved
+     * single figures on this slice by about half a point. The ranker must stay at least 1.5 points ahead.
+     */
+    private static final double MARGIN_OVER_COUNT_SCORE = 0.015;
+    /** 0.954 measured end to end (522 of 547); 0.92 lets 19 heads (about 2 standard errors) go. */
     private static final double CANDIDATE_RECALL_FLOOR = 0.92;
     /** Verb heads 0.750 (n = 232, SE 2.8 points), noun heads 0.775 (n = 275, SE 2.5): both held at 0.70. */
     private static final double HEAD_CLASS_FLOOR = 0.70;
@@ -93,6 +99,15 @@ class EwtDevSliceEndToEndTest {
             assertTrue(accuracy - baseline.value() >= MARGIN_OVER_BASELINES,
                     () -> "accuracy " + accuracy + " vs " + name + " " + baseline.value());
         }
+    }
+
+    @Test
+    void theLearnedRankerBeatsTheCountScoreOfTheSameRun() {
+        double accuracy = evaluation.attachment().value();
+        Accuracy counts = evaluation.baselines().get(RunningTextEvaluation.COUNT_SCORE);
+        assertEquals(547, counts.total());
+        assertTrue(accuracy - counts.value() >= MARGIN_OVER_COUNT_SCORE,
+                () -> "ranker " + accuracy + " vs count-based score " + counts.value());
     }
 
     @Test
