@@ -15,6 +15,8 @@ import java.util.Locale;
 enum AttachmentFeature {
     /** log P(candidate) under the count-based score; parts: class. */
     COUNT_SCORE_LOG(AttachmentFeatureFamily.COUNT_SCORE, 1),
+    /** log of one factor of the count-based score (0 structural rate, 1 class, 2 word); parts: factor, class. */
+    COUNT_SCORE_FACTOR(AttachmentFeatureFamily.COUNT_SCORE, 1),
     /** The most specific count level the count-based score had; parts: level, class. */
     COUNT_LEVEL(AttachmentFeatureFamily.COUNT_SCORE, 1),
     /** log((hits + ½) / (misses + ½)) of one lexical level; parts: level ({@link HeadChoiceCounts.Part}), class. */
@@ -43,6 +45,8 @@ enum AttachmentFeature {
     RANK_IN_CLASS(AttachmentFeatureFamily.POSITION, 1),
     /** The whole structural description; parts: the three parts of the structure key. */
     STRUCTURE(AttachmentFeatureFamily.POSITION, 2),
+    /** The whole structural description with the preposition; parts: preposition, first two structure parts, third. */
+    PREPOSITION_STRUCTURE(AttachmentFeatureFamily.POSITION, 3),
     /** The head follows the phrase; parts: class. */
     AFTER_PHRASE(AttachmentFeatureFamily.POSITION, 1),
     /** Punctuation between candidate and preposition; parts: nearest (1) or not, class. */
@@ -96,7 +100,9 @@ enum AttachmentFeature {
         String p = "'" + q.preposition() + "'";
         String cls = q.headClass(i).label();
         switch (of(key)) {
-            case COUNT_SCORE_LOG: return "the count-based score";
+            case COUNT_SCORE_LOG: return "the count-based head-choice score";
+            case COUNT_SCORE_FACTOR: return new String[] {"how often a candidate in this position is the head",
+                    "how strongly " + p + " prefers a " + cls, "how strongly " + head + " takes " + p}[a];
             case COUNT_LEVEL: return "count evidence at the level '" + HeadChoice.Evidence.values()[a].label() + "'";
             case LEVEL_LOG_ODDS: case LEVEL_TRIALS: case LEVEL_UNSEEN: {
                 String seen = of(key) == LEVEL_UNSEEN ? "no counts of " : "counts of ";
@@ -119,6 +125,7 @@ enum AttachmentFeature {
             case DISTANCE: return "a " + cls + " " + distanceWords(q.distance(i));
             case RANK_IN_CLASS: return a == 0 ? "the nearest " + cls : "a " + cls + " with " + a + (a == 3 ? " or more" : "") + " nearer";
             case STRUCTURE: return "this " + cls + "'s position among the candidates";
+            case PREPOSITION_STRUCTURE: return p + " with this " + cls + "'s position among the candidates";
             case AFTER_PHRASE: return "a " + cls + " after the phrase";
             case PUNCTUATION_BETWEEN: return "punctuation between " + head + " and " + p;
             case CANDIDATE_TAG: return head + " tagged " + PennTags.tag(a);

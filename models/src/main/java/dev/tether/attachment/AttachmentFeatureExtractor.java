@@ -56,16 +56,13 @@ public final class AttachmentFeatureExtractor {
         return s;
     }
 
-    /** The count-based choice (today's scorer) on the same statistics, for the evidence and as a baseline. */
-    public HeadChoice countChoice(AttachmentQuery q) {
-        return countScorer.choose(q);
-    }
-
     /**
-     * Fills {@code out} with the features of every candidate of {@code q}; {@code base} is {@link #countChoice} of
-     * the same query.
+     * Fills {@code out} with the features of every candidate of {@code q} and returns the count-based choice
+     * (today's scorer) on the same statistics, for the evidence and as a baseline.
      */
-    public void extract(AttachmentQuery q, HeadChoice base, CandidateFeatures out) {
+    public HeadChoice extract(AttachmentQuery q, CandidateFeatures out) {
+        double[][] factors = new double[q.size()][3];
+        HeadChoice base = countScorer.choose(q, factors);
         out.reset();
         int n = q.size();
         String prepositionKey = normalizer.preposition(q.preposition());
@@ -99,6 +96,9 @@ public final class AttachmentFeatureExtractor {
             String headKey = HeadChoiceScorer.headKey(normalizer, q.head(i), hc);
             if (on(AttachmentFeatureFamily.COUNT_SCORE)) {
                 out.add(AttachmentFeature.COUNT_SCORE_LOG.key(0, 0, c), Math.max(-20, Math.log(base.probability(i))));
+                for (int k = 0; k < 3; k++) {
+                    out.add(AttachmentFeature.COUNT_SCORE_FACTOR.key(k, 0, c), Math.max(-20, Math.min(20, Math.log(factors[i][k]))));
+                }
                 out.add(AttachmentFeature.COUNT_LEVEL.key(base.evidence(i).ordinal(), 0, c), 1);
             }
             if (on(AttachmentFeatureFamily.BACKED_OFF)) {
@@ -142,6 +142,8 @@ public final class AttachmentFeatureExtractor {
                 out.add(AttachmentFeature.RANK_IN_CLASS.key(Math.min(rank, 3), 0, c), 1);
                 long s = structure[i];
                 out.add(AttachmentFeature.STRUCTURE.key(TupleKey.part(s, 3, 0), TupleKey.part(s, 3, 1), TupleKey.part(s, 3, 2)), 1);
+                out.add(AttachmentFeature.PREPOSITION_STRUCTURE.key(lp, TupleKey.part(s, 3, 0) * 128 + TupleKey.part(s, 3, 1),
+                        TupleKey.part(s, 3, 2)), 1);
                 if (q.distance(i) <= 0) out.add(AttachmentFeature.AFTER_PHRASE.key(0, 0, c), 1);
             }
             if (on(AttachmentFeatureFamily.PUNCTUATION) && q.punctuated(i)) {
@@ -178,6 +180,7 @@ public final class AttachmentFeatureExtractor {
                 if (lo > 0) out.add(AttachmentFeature.OBJECT_WORD.key(lo, lp, c), 1);
             }
         }
+        return base;
     }
 
     private boolean on(AttachmentFeatureFamily f) {

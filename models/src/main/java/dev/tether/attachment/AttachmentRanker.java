@@ -44,9 +44,8 @@ public final class AttachmentRanker {
 
     public HeadChoice choose(AttachmentQuery q) {
         if (q.size() == 0) throw new IllegalArgumentException("no candidate heads for '" + q.preposition() + "'");
-        HeadChoice base = extractor.countChoice(q);
         CandidateFeatures f = buffers.get();
-        extractor.extract(q, base, f);
+        HeadChoice base = extractor.extract(q, f);
         double[] p = new double[q.size()];
         weights.probabilities(f, p);
         return base.withProbabilities(p);
@@ -66,7 +65,7 @@ public final class AttachmentRanker {
         int second = choice.runnerUp();
         if (best < 0 || second < 0) return reasons;
         CandidateFeatures f = new CandidateFeatures();
-        extractor.extract(q, extractor.countChoice(q), f);
+        extractor.extract(q, f);
         int n = f.to(best) - f.from(best) + f.to(second) - f.from(second);
         long[] keys = new long[n];
         double[] pull = new double[n];

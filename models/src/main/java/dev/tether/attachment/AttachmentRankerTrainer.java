@@ -31,7 +31,7 @@ public final class AttachmentRankerTrainer {
         if (example.gold() < 0) return;
         AttachmentQuery q = example.query();
         try {
-            extractor.extract(q, extractor.countChoice(q), buffer);
+            extractor.extract(q, buffer);
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(example.source() + ": " + e.getMessage(), e);
         }

@@ -68,6 +68,14 @@ public final class HeadChoiceScorer {
     }
 
     public HeadChoice choose(AttachmentQuery q) {
+        return choose(q, null);
+    }
+
+    /**
+     * As {@link #choose(AttachmentQuery)}; when {@code factors} is given (one row of three per candidate), it receives
+     * each candidate's structural rate S, class factor (Pc/Rc) and word factor (Pw/Pc).
+     */
+    HeadChoice choose(AttachmentQuery q, double[][] factors) {
         int n = q.size();
         Vocabulary words = counts.words();
         int p = counts.prepositions().id(normalizer.preposition(q.preposition()));
@@ -128,6 +136,11 @@ public final class HeadChoiceScorer {
                 }
             }
             score[i] = s * Math.pow(pc / classRate[c], classWeight) * Math.pow(pw / pc, wordWeight);
+            if (factors != null) {
+                factors[i][0] = s;
+                factors[i][1] = pc / classRate[c];
+                factors[i][2] = pw / pc;
+            }
             sum += score[i];
             evidence[i] = ev;
             evidenceHits[i] = eh;

@@ -29,6 +29,25 @@ public final class TreebankExamples {
     void countGold() { goldAttachments++; }
     void countMissed() { missedPrepositions++; }
 
+    /**
+     * The first {@code share} of the examples (in file order, so whole stretches of text) with their quadruples, for
+     * learning curves. Coverage counts are those of the kept part.
+     */
+    public TreebankExamples firstShare(double share) {
+        if (!(share > 0 && share <= 1)) throw new IllegalArgumentException("share must be in (0, 1], got " + share);
+        TreebankExamples part = new TreebankExamples();
+        int keep = (int) Math.round(share * examples.size());
+        java.util.Set<String> sources = new java.util.HashSet<>();
+        for (AttachmentExample e : examples.subList(0, keep)) {
+            part.addExample(e);
+            sources.add(e.source());
+        }
+        for (LabelledQuadruple q : quadruples) if (sources.contains(q.source())) part.addQuadruple(q);
+        part.goldAttachments = (int) Math.round(share * goldAttachments);
+        part.missedPrepositions = (int) Math.round(share * missedPrepositions);
+        return part;
+    }
+
     /** One event per gold attachment whose preposition the proposer found; gold index -1 when the head is not a candidate. */
     public List<AttachmentExample> examples() { return Collections.unmodifiableList(examples); }
     /** Classic verb–noun–preposition–noun configurations whose gold head is the verb or the noun. */
