@@ -8,7 +8,9 @@ import dev.tether.treebank.TreebankExamples;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
+import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
+import dev.tether.preprocessing.TreebankTaggerTrainer;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -21,7 +23,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
-/** {@code tether train}: counts training sources into a new model file. */
+/**
+ * {@code tether train}: counts training sources into a new model file. Treebanks ({@code --conllu}) also train the
+ * model's part-of-speech tagger from their Penn Treebank tags, which the built-in preprocessing then uses;
+ * {@code --no-tagger} trains none, so the shipped OpenNLP tagger stays in use.
+ */
 final class TrainCommand implements Command {
     @Override
     public String name() {
@@ -30,12 +36,12 @@ final class TrainCommand implements Command {
 
     @Override
     public String usage() {
-        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed] --out MODEL";
+        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed] [--no-tagger] --out MODEL";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out"), Set.of("skip-malformed"));
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out"), Set.of("skip-malformed", "no-tagger"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu")) {
             throw new UsageException("give at least one training source with --quadruples or --conllu");
@@ -70,11 +76,27 @@ final class TrainCommand implements Command {
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
+        if (a.has("no-tagger")) trainer.withTagger(null);
+        else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
         TetherModel model = trainer.build();
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
         return Tether.OK;
+    }
+
+    /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */
+    private static void trainTagger(List<String> files, ModelTrainer trainer, PrintStream out) throws IOException {
+        TreebankTaggerTrainer tagger = new TreebankTaggerTrainer();
+        for (String f : files) out.println("tagger: " + tagger.add(Path.of(f)).summary());
+        if (tagger.sentences() == 0) {
+            out.println("tagger: none trained (no usable Penn Treebank tags); the model "
+                    + (trainer.hasTagger() ? "keeps the base model's tagger" : "leaves the shipped OpenNLP tagger in use"));
+            return;
+        }
+        TaggerSection section = tagger.train();
+        trainer.withTagger(section);
+        out.printf("tagger: %s (%,d bytes)%n", section.description(), section.size());
     }
 
     private static String fileSha256(Path file) throws IOException {

@@ -39,7 +39,8 @@ import java.util.zip.InflaterInputStream;
  *   SHA-256                   32 bytes over everything before it
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts) and
- * {@code head-choice} (the counts for choosing among all candidate heads); a reader
+ * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model was trained with one,
+ * {@code tagger} (a part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -50,13 +51,15 @@ public final class ModelFile {
     private static final String INFO = "info";
     private static final String QUADRUPLES = "quadruples";
     private static final String HEAD_CHOICE = "head-choice";
+    private static final String TAGGER = "tagger";
 
     private ModelFile() {
     }
 
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
-        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
+        byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
+                model.tagger().orElse(null));
         Path folder = target.toAbsolutePath().getParent();
         if (folder != null) Files.createDirectories(folder);
         if (Files.isDirectory(target)) {
@@ -103,7 +106,7 @@ public final class ModelFile {
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                         HeadChoiceCounts headChoice) throws IOException {
+                         HeadChoiceCounts headChoice, TaggerSection tagger) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -118,6 +121,7 @@ public final class ModelFile {
         }));
         sections.put(QUADRUPLES, section(quadruples::write));
         sections.put(HEAD_CHOICE, section(headChoice::write));
+        if (tagger != null) sections.put(TAGGER, section(tagger::write));
 
         ByteArrayOutputStream payload = new ByteArrayOutputStream();
         Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);
@@ -190,7 +194,12 @@ public final class ModelFile {
             }
             QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
             HeadChoiceCounts headChoice = HeadChoiceCounts.read(new DataInputStream(new ByteArrayInputStream(heads)));
-            return new TetherModel(normalizer, sources, counts, headChoice, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+            byte[] tag = sections.get(TAGGER);
+            TaggerSection tagger = tag == null ? null : TaggerSection.read(tag, name);
+            return new TetherModel(normalizer, sources, counts, headChoice, tagger,
+                    java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+        } catch (ModelFormatException e) {
+            throw e;
         } catch (IOException | RuntimeException e) {
             throw new ModelFormatException(name + " is damaged: its content cannot be read (" + e.getMessage()
                     + "); copy or train it again", e);

@@ -30,6 +30,7 @@ public final class ModelTrainer {
     private final QuadrupleCountsBuilder quadruples = new QuadrupleCountsBuilder();
     private final HeadChoiceCountsBuilder headChoice = new HeadChoiceCountsBuilder();
     private final List<ModelSource> sources = new ArrayList<>();
+    private TaggerSection tagger;
 
     /** Counts every quadruple of {@code set}. */
     public ModelTrainer addQuadruples(QuadrupleSet set) {
@@ -80,6 +81,7 @@ public final class ModelTrainer {
         }
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
+        if (tagger == null) tagger = model.tagger().orElse(null);
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
         return this;
     }
@@ -95,12 +97,26 @@ public final class ModelTrainer {
         return this;
     }
 
+    /**
+     * The part-of-speech tagger the model will carry; it replaces one taken over from a base model. {@code null}: none
+     * (the built-in preprocessing then uses its shipped tagger).
+     */
+    public ModelTrainer withTagger(TaggerSection tagger) {
+        this.tagger = tagger;
+        return this;
+    }
+
+    /** Whether the model will carry a tagger (one set here or taken over from a base model). */
+    public boolean hasTagger() {
+        return tagger != null;
+    }
+
     public TetherModel build() {
         QuadrupleCounts counts = quadruples.build();
         HeadChoiceCounts heads = headChoice.build();
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ModelFile.fingerprint(encoded));
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, tagger);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, tagger, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }

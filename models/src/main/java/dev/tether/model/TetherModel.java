@@ -9,6 +9,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A trained model: the counts the scorers read, the normalization they were counted under, and where they came
@@ -26,16 +27,18 @@ public final class TetherModel {
     private final List<ModelSource> sources;
     private final QuadrupleCounts quadruples;
     private final HeadChoiceCounts headChoice;
+    private final TaggerSection tagger;
     private final String id;
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                HeadChoiceCounts headChoice, String id) {
+                HeadChoiceCounts headChoice, TaggerSection tagger, String id) {
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
         this.headChoice = headChoice;
+        this.tagger = tagger;
         this.id = id;
         this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
     }
@@ -47,6 +50,8 @@ public final class TetherModel {
     /** The scorer that chooses among all candidate heads, built once with the model. */
     public HeadChoiceScorer headChoiceScorer() { return headChoiceScorer; }
     public WordNormalizer normalizer() { return normalizer; }
+    /** The part-of-speech tagger trained with this model, if it was trained with one (opaque bytes; see {@link TaggerSection}). */
+    public Optional<TaggerSection> tagger() { return Optional.ofNullable(tagger); }
 
     /** A short fingerprint of the model's content (the start of its checksum), recorded with every decision. */
     public String id() { return id; }

@@ -175,7 +175,7 @@ class ModelFileFuzzTest {
                 new String[] {"painted", "deck", "fresh"}, new HeadClass[] {HeadClass.VERB, HeadClass.NOUN, HeadClass.ADJECTIVE},
                 new int[] {3, 1, 2}, new boolean[] {false, false, true}), 0, "tiny:2"));
         TetherModel model = trainer.build();
-        return ModelFile.encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
+        return ModelFile.encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(), model.tagger().orElse(null));
     }
 
     private static LabelledQuadruple lq(String v, String n1, String p, String n2, AttachmentSite site) {
