@@ -28,6 +28,8 @@ class TrainTaggerCommandTest {
         assertTrue(run.out().contains("ferry-logs-tagged.conllu: 64 of 64 sentences for the tagger"), run::toString);
         TetherModel m = ModelFile.read(model);
         assertTrue(m.tagger().orElseThrow().description().contains("maximum entropy"), m.tagger()::toString);
+        CommandLineRun inspect = CommandLineRun.of("inspect", model.toString());
+        assertTrue(inspect.out().contains("tagger         OpenNLP") && inspect.out().contains("64 sentences"), inspect::toString);
     }
 
     @Test
@@ -38,6 +40,7 @@ class TrainTaggerCommandTest {
         assertEquals(Tether.OK, run.exitCode(), run::toString);
         assertTrue(ModelFile.read(model).tagger().isEmpty());
         assertTrue(!run.out().contains("tagger:"), run::toString);
+        assertTrue(CommandLineRun.of("inspect", model.toString()).out().contains("tagger         none"));
     }
 
     @Test

@@ -188,9 +188,14 @@ class EngineDescriptorTest {
     void resolverDescriptorAgreesWithItsClass() throws Exception {
         AnalysisEngineDescription xml = byName(RESOLVER);
         assertAgrees(xml, AttachmentResolver.class);
+        assertOptionalModelDependency(xml, AttachmentResolver.RES_MODEL);
+    }
+
+    /** The descriptor's only resource dependency is the optional shared model under {@code key}. */
+    private static void assertOptionalModelDependency(AnalysisEngineDescription xml, String key) {
         ExternalResourceDependency[] dependencies = xml.getExternalResourceDependencies();
         assertEquals(1, dependencies.length);
-        assertEquals(AttachmentResolver.RES_MODEL, dependencies[0].getKey());
+        assertEquals(key, dependencies[0].getKey());
         assertEquals(ModelHolder.class.getName(), dependencies[0].getInterfaceName());
         assertTrue(dependencies[0].isOptional(), "the model resource is optional");
     }
@@ -199,11 +204,7 @@ class EngineDescriptorTest {
     void preprocessorDescriptorAgreesWithItsClass() throws Exception {
         AnalysisEngineDescription xml = byName(PREPROCESSOR);
         assertAgrees(xml, TextPreprocessor.class);
-        ExternalResourceDependency[] dependencies = xml.getExternalResourceDependencies();
-        assertEquals(1, dependencies.length);
-        assertEquals(TextPreprocessor.RES_MODEL, dependencies[0].getKey());
-        assertEquals(ModelHolder.class.getName(), dependencies[0].getInterfaceName());
-        assertTrue(dependencies[0].isOptional(), "the model resource is optional");
+        assertOptionalModelDependency(xml, TextPreprocessor.RES_MODEL);
     }
 
     @Test
