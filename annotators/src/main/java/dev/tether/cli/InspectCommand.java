@@ -59,6 +59,8 @@ final class InspectCommand implements Command {
         out.printf("  class                %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS));
         RankerSummary.print(m, out);
         out.printf("approximate heap of the count tables: %.1f MB%n", (q.approximateBytes() + h.approximateBytes()) / 1e6);
+        out.println(m.tagger().map(t -> String.format("tagger         %s (%,d bytes)", t.description(), t.size()))
+                .orElse("tagger         none (the built-in preprocessing uses the shipped OpenNLP tagger)"));
         return Tether.OK;
     }
 }

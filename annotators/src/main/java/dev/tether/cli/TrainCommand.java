@@ -9,7 +9,9 @@ import dev.tether.treebank.TreebankExamples;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
+import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
+import dev.tether.preprocessing.TreebankTaggerTrainer;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -23,7 +25,11 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 
-/** {@code tether train}: counts training sources into a new model file. */
+/**
+ * {@code tether train}: counts training sources into a new model file. Treebanks ({@code --conllu}) also train the
+ * model's part-of-speech tagger from their Penn Treebank tags, which the built-in preprocessing then uses;
+ * {@code --no-tagger} trains none, so the shipped OpenNLP tagger stays in use.
+ */
 final class TrainCommand implements Command {
     @Override
     public String name() {
@@ -33,13 +39,13 @@ final class TrainCommand implements Command {
     @Override
     public String usage() {
         return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed]"
-                + " [--ranker-without FAMILY...] [--no-ranker] --out MODEL";
+                + " [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out", "ranker-without"),
-                Set.of("skip-malformed", "no-ranker"));
+                Set.of("skip-malformed", "no-ranker", "no-tagger"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu")) {
             throw new UsageException("give at least one training source with --quadruples or --conllu");
@@ -93,6 +99,8 @@ final class TrainCommand implements Command {
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
+        if (a.has("no-tagger")) trainer.withTagger(null);
+        else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
         long start = System.nanoTime();
         TetherModel model = trainer.build();
         out.printf("built the model in %.1f s%n", (System.nanoTime() - start) / 1e9);
@@ -101,6 +109,20 @@ final class TrainCommand implements Command {
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
         return Tether.OK;
+    }
+
+    /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */
+    private static void trainTagger(List<String> files, ModelTrainer trainer, PrintStream out) throws IOException {
+        TreebankTaggerTrainer tagger = new TreebankTaggerTrainer();
+        for (String f : files) out.println("tagger: " + tagger.add(Path.of(f)).summary());
+        if (tagger.sentences() == 0) {
+            out.println("tagger: none trained (no usable Penn Treebank tags); the model "
+                    + (trainer.hasTagger() ? "keeps the base model's tagger" : "leaves the shipped OpenNLP tagger in use"));
+            return;
+        }
+        TaggerSection section = tagger.train();
+        trainer.withTagger(section);
+        out.printf("tagger: %s (%,d bytes)%n", section.description(), section.size());
     }
 
     private static String fileSha256(Path file) throws IOException {

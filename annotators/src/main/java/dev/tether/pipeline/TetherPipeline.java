@@ -16,10 +16,13 @@ public final class TetherPipeline {
     private TetherPipeline() {
     }
 
-    /** Raw text in, attachment decisions out. {@code model} is {@code default} or a model file. */
+    /**
+     * Raw text in, attachment decisions out. {@code model} is {@code default} or a model file; the preprocessing tags
+     * with that model's tagger when it has one.
+     */
     public static AnalysisEngineDescription forRawText(String model) throws ResourceInitializationException {
         return AnalysisEngineFactory.createEngineDescription(
-                AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class),
+                AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_MODEL, model),
                 resolution(model));
     }
 

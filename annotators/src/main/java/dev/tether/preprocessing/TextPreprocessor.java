@@ -6,16 +6,21 @@ import org.apache.uima.UimaContext;
 import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
 import org.apache.uima.fit.component.JCasAnnotator_ImplBase;
 import org.apache.uima.fit.descriptor.ConfigurationParameter;
+import org.apache.uima.fit.descriptor.ExternalResource;
 import org.apache.uima.fit.descriptor.ResourceMetaData;
 import org.apache.uima.fit.descriptor.TypeCapability;
 import org.apache.uima.jcas.JCas;
 import org.apache.uima.resource.ResourceInitializationException;
 import org.apache.uima.util.Level;
 
+import dev.tether.model.LoadedModels;
+import dev.tether.model.ModelHolder;
+import dev.tether.model.TetherModel;
 import dev.tether.type.Chunk;
 import dev.tether.type.Sentence;
 import dev.tether.type.Token;
 import opennlp.tools.chunker.ChunkerME;
+import opennlp.tools.postag.POSModel;
 import opennlp.tools.postag.POSTagFormat;
 import opennlp.tools.postag.POSTaggerME;
 import opennlp.tools.sentdetect.SentenceDetectorME;
@@ -26,6 +31,11 @@ import opennlp.tools.util.Span;
  * Built-in preprocessing for raw text: sentences, tokens with Penn Treebank part-of-speech tags, and base chunks,
  * written as {@link Sentence}, {@link Token} and {@link Chunk}. Uses the English OpenNLP models shared by the
  * process ({@link EnglishPreprocessingModels}); the OpenNLP tools themselves belong to this engine instance.
+ *
+ * <p><b>Tagger.</b> A Tether model trained from a treebank carries a part-of-speech tagger of its own (its
+ * {@code tagger} section, see {@link ModelTaggers}). The preprocessor tags with the tagger of the model the pipeline
+ * resolves with, bound as the shared resource {@link #RES_MODEL} or named by {@link #PARAM_MODEL}, and with the
+ * shipped OpenNLP tagger when that model has none. Either way the tags are Penn Treebank tags.
  *
  * <p><b>Over-long sentences.</b> OpenNLP's taggers search a beam over the whole sequence they are given, and their
  * cost grows faster than the sentence length. A stretch of text without sentence punctuation (a table dump, a
@@ -59,6 +69,19 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "true")
     private boolean chunk;
 
+    /**
+     * The Tether model whose tagger tags the text: {@code default} for the shipped model, or the path of a model
+     * file. A model without a tagger leaves the shipped OpenNLP tagger in use. Ignored when {@link #RES_MODEL} is bound.
+     */
+    public static final String PARAM_MODEL = "model";
+    @ConfigurationParameter(name = PARAM_MODEL, mandatory = false, defaultValue = LoadedModels.DEFAULT)
+    private String modelLocation;
+
+    /** Key of the optional shared model resource ({@link ModelHolder}), the same one the resolver binds. */
+    public static final String RES_MODEL = "sharedModel";
+    @ExternalResource(key = RES_MODEL, mandatory = false)
+    private ModelHolder sharedModel;
+
     private SentenceDetectorME sentenceDetector;
     private TokenizerME tokenizer;
     private POSTaggerME tagger;
@@ -83,11 +106,22 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         } catch (IOException e) {
             throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {e.getMessage()}, e);
         }
+        POSModel posModel;
+        try {
+            TetherModel model = sharedModel != null ? sharedModel.model() : LoadedModels.get(modelLocation);
+            posModel = ModelTaggers.of(model).orElse(models.posModel());
+            getLogger().log(Level.CONFIG, "text preprocessor tags with " + (posModel == models.posModel()
+                    ? "the shipped OpenNLP tagger " + EnglishPreprocessingModels.POS_MODEL
+                    : "the tagger of model " + model.id()));
+        } catch (IOException e) {
+            throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {
+                    "cannot set up the tagger of the model given by parameter " + PARAM_MODEL + ": " + e.getMessage()}, e);
+        }
         sentenceDetector = new SentenceDetectorME(models.sentenceModel());
         tokenizer = new TokenizerME(models.tokenizerModel());
         // PENN: keep the model's own Penn Treebank tags. The default maps them to Universal Dependencies tags, which
         // the 1.5 chunker model was not trained on.
-        tagger = new POSTaggerME(models.posModel(), POSTagFormat.PENN);
+        tagger = new POSTaggerME(posModel, POSTagFormat.PENN);
         chunker = chunk ? new ChunkerME(models.chunkerModel()) : null;
     }
 

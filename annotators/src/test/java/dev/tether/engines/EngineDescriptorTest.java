@@ -157,7 +157,7 @@ class EngineDescriptorTest {
         }
     }
 
-    /** Each aggregate declares the model resource once and binds it to the resolver's dependency of the same interface. */
+    /** Each aggregate declares the model resource once and binds it to the resolver's (and preprocessor's) dependency of the same interface. */
     @Test
     void aggregatesDeclareTheModelOnceAndBindItToTheResolver() throws Exception {
         for (String name : List.of(RAW_TEXT_PIPELINE, TAGGED_TEXT_PIPELINE)) {
@@ -166,9 +166,14 @@ class EngineDescriptorTest {
             assertEquals(1, resources.getExternalResources().length, name + ": one model resource");
             assertEquals(SharedModelResource.class.getName(), resources.getExternalResources()[0].getImplementationName());
             ExternalResourceBinding[] bindings = resources.getExternalResourceBindings();
-            assertEquals(1, bindings.length, name);
-            assertEquals("resolver/" + AttachmentResolver.RES_MODEL, bindings[0].getKey(), name);
-            assertEquals(resources.getExternalResources()[0].getName(), bindings[0].getResourceName(), name);
+            // The raw-text flow binds the same model to its preprocessor too, which tags with the model's tagger.
+            List<String> keys = name.equals(RAW_TEXT_PIPELINE)
+                    ? List.of("preprocessor/" + TextPreprocessor.RES_MODEL, "resolver/" + AttachmentResolver.RES_MODEL)
+                    : List.of("resolver/" + AttachmentResolver.RES_MODEL);
+            assertEquals(keys, java.util.Arrays.stream(bindings).map(ExternalResourceBinding::getKey).toList(), name);
+            for (ExternalResourceBinding b : bindings) {
+                assertEquals(resources.getExternalResources()[0].getName(), b.getResourceName(), name);
+            }
             ResourceSpecifier resolver = aggregate.getDelegateAnalysisEngineSpecifiers().get("resolver");
             assertEquals(AttachmentResolver.class.getName(),
                     ((AnalysisEngineDescription) resolver).getAnnotatorImplementationName(), name);
@@ -183,16 +188,23 @@ class EngineDescriptorTest {
     void resolverDescriptorAgreesWithItsClass() throws Exception {
         AnalysisEngineDescription xml = byName(RESOLVER);
         assertAgrees(xml, AttachmentResolver.class);
+        assertOptionalModelDependency(xml, AttachmentResolver.RES_MODEL);
+    }
+
+    /** The descriptor's only resource dependency is the optional shared model under {@code key}. */
+    private static void assertOptionalModelDependency(AnalysisEngineDescription xml, String key) {
         ExternalResourceDependency[] dependencies = xml.getExternalResourceDependencies();
         assertEquals(1, dependencies.length);
-        assertEquals(AttachmentResolver.RES_MODEL, dependencies[0].getKey());
+        assertEquals(key, dependencies[0].getKey());
         assertEquals(ModelHolder.class.getName(), dependencies[0].getInterfaceName());
         assertTrue(dependencies[0].isOptional(), "the model resource is optional");
     }
 
     @Test
     void preprocessorDescriptorAgreesWithItsClass() throws Exception {
-        assertAgrees(byName(PREPROCESSOR), TextPreprocessor.class);
+        AnalysisEngineDescription xml = byName(PREPROCESSOR);
+        assertAgrees(xml, TextPreprocessor.class);
+        assertOptionalModelDependency(xml, TextPreprocessor.RES_MODEL);
     }
 
     @Test

@@ -40,8 +40,9 @@ import java.util.zip.InflaterInputStream;
  *   SHA-256                   32 bytes over everything before it
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
- * {@code head-choice} (the counts for choosing among all candidate heads) and, when the model has one,
- * {@code attachment-ranker} (its own version, feature families, feature keys and weights); a reader
+ * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
+ * {@code attachment-ranker} (its own version, feature families, feature keys and weights) and {@code tagger} (a
+ * part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -53,6 +54,7 @@ public final class ModelFile {
     private static final String QUADRUPLES = "quadruples";
     private static final String HEAD_CHOICE = "head-choice";
     private static final String ATTACHMENT_RANKER = "attachment-ranker";
+    private static final String TAGGER = "tagger";
 
     private ModelFile() {
     }
@@ -60,7 +62,7 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null));
         Path folder = target.toAbsolutePath().getParent();
         if (folder != null) Files.createDirectories(folder);
         if (Files.isDirectory(target)) {
@@ -107,13 +109,13 @@ public final class ModelFile {
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                         HeadChoiceCounts headChoice, AttachmentRanker ranker) throws IOException {
-        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker));
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
+        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger));
     }
 
     /** The named sections of a model, in file order. */
     static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                                        HeadChoiceCounts headChoice, AttachmentRanker ranker) throws IOException {
+                                        HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -131,6 +133,7 @@ public final class ModelFile {
         if (ranker != null) {
             sections.put(ATTACHMENT_RANKER, section(out -> AttachmentRanker.write(ranker.weights(), ranker.families(), out)));
         }
+        if (tagger != null) sections.put(TAGGER, section(tagger::write));
         return sections;
     }
 
@@ -220,7 +223,10 @@ public final class ModelFile {
                 ranker = AttachmentRanker.read(new DataInputStream(new ByteArrayInputStream(rankerBytes)), headChoice, counts,
                         new dev.tether.vocabulary.WordNormalizer());
             }
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+            byte[] tag = sections.get(TAGGER);
+            TaggerSection tagger = tag == null ? null : TaggerSection.read(tag, name);
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger,
+                    java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;
         } catch (IOException | RuntimeException e) {

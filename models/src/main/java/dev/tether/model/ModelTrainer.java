@@ -58,6 +58,7 @@ public final class ModelTrainer {
     private Set<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
     private RankerTrainer rankerTrainer = new RankerTrainer();
     private boolean rankerWanted = true;
+    private TaggerSection tagger;
 
     /** Counts every quadruple of {@code set}. */
     public ModelTrainer addQuadruples(QuadrupleSet set) {
@@ -120,6 +121,7 @@ public final class ModelTrainer {
         baseModels.add(model);
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
+        if (tagger == null) tagger = model.tagger().orElse(null);
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
         return this;
     }
@@ -157,6 +159,20 @@ public final class ModelTrainer {
         return this;
     }
 
+    /**
+     * The part-of-speech tagger the model will carry; it replaces one taken over from a base model. {@code null}: none
+     * (the built-in preprocessing then uses its shipped tagger).
+     */
+    public ModelTrainer withTagger(TaggerSection tagger) {
+        this.tagger = tagger;
+        return this;
+    }
+
+    /** Whether the model will carry a tagger (one set here or taken over from a base model). */
+    public boolean hasTagger() {
+        return tagger != null;
+    }
+
     public TetherModel build() {
         QuadrupleCounts counts = quadruples.build();
         HeadChoiceCounts heads = headChoice.build();
@@ -173,8 +189,8 @@ public final class ModelTrainer {
             }
         }
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, ModelFile.fingerprint(encoded));
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }

@@ -30,17 +30,19 @@ public final class TetherModel {
     private final List<ModelSource> sources;
     private final QuadrupleCounts quadruples;
     private final HeadChoiceCounts headChoice;
+    private final TaggerSection tagger;
     private final String id;
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
     private final AttachmentRanker attachmentRanker;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, String id) {
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, String id) {
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
         this.headChoice = headChoice;
+        this.tagger = tagger;
         this.id = id;
         this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
         this.attachmentRanker = attachmentRanker;
@@ -60,6 +62,8 @@ public final class TetherModel {
         return attachmentRanker != null ? attachmentRanker.choose(q) : headChoiceScorer.choose(q);
     }
     public WordNormalizer normalizer() { return normalizer; }
+    /** The part-of-speech tagger trained with this model, if it was trained with one (opaque bytes; see {@link TaggerSection}). */
+    public Optional<TaggerSection> tagger() { return Optional.ofNullable(tagger); }
 
     /** A short fingerprint of the model's content (the start of its checksum), recorded with every decision. */
     public String id() { return id; }

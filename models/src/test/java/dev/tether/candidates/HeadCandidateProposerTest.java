@@ -81,6 +81,38 @@ class HeadCandidateProposerTest {
         assertTrue(on.indexOf(0) >= 0, "'Based' itself stays a candidate: " + on);
     }
 
+    /**
+     * The Penn Treebank tags every "to" {@code TO} (Santorini 1990, the tagging guidelines); UD English EWT's XPOS
+     * column tags prepositional "to" {@code IN} and keeps {@code TO} for the infinitive (visible in its train split:
+     * 1,806 "to" ADP/IN, 3,266 PART/TO). A tagger trained from either gives the finder the same preposition.
+     */
+    private static final String TO_THE_WORKSHOP = "Moved/VBD the/DT pump/NN to/%s the/DT workshop/NN ./.";
+
+    @Test
+    void prepositionalToTaggedToAsInThePennTreebank() {
+        List<PrepositionCandidates> c = all(String.format(TO_THE_WORKSHOP, "TO"));
+        assertEquals(1, c.size());
+        assertEquals(new PrepositionCandidates(3, 5, new int[]{2, 0}, new HeadClass[]{HeadClass.NOUN, HeadClass.VERB}, 0, 2), c.get(0));
+    }
+
+    @Test
+    void prepositionalToTaggedInAsInTheEnglishWebTreebank() {
+        List<PrepositionCandidates> c = all(String.format(TO_THE_WORKSHOP, "IN"));
+        assertEquals(1, c.size());
+        assertEquals(new PrepositionCandidates(3, 5, new int[]{2, 0}, new HeadClass[]{HeadClass.NOUN, HeadClass.VERB}, 0, 2), c.get(0));
+        // Later phrases see the same heads under both conventions.
+        String later = "Moved/VBD the/DT pump/NN to/%s the/DT workshop/NN for/IN repairs/NNS ./.";
+        assertEquals(all(String.format(later, "TO")), all(String.format(later, "IN")));
+    }
+
+    @Test
+    void infinitivalToIsNoPrepositionUnderEitherConvention() {
+        // Both conventions tag the infinitive TO; its verb ends the search for an object.
+        List<PrepositionCandidates> c = all("The/DT mate/NN wants/VBZ to/TO check/VB the/DT valve/NN in/IN the/DT workshop/NN ./.");
+        assertEquals(1, c.size(), "only 'in': " + c);
+        assertEquals(7, c.get(0).preposition());
+    }
+
     @Test
     void frontedPhraseGetsTheMainVerbThatFollows() {
         PrepositionCandidates in = all("In/IN the/DT morning/NN ,/, the/DT crew/NN had/VBD already/RB checked/VBN the/DT seals/NNS ./.").get(0);

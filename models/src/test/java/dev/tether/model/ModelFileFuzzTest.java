@@ -176,7 +176,7 @@ class ModelFileFuzzTest {
                 .candidate("fresh", "JJ", HeadClass.ADJECTIVE, 2, true).build(), 0, "tiny:2"));
         TetherModel model = trainer.build();
         return ModelFile.encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null));
     }
 
     private static LabelledQuadruple lq(String v, String n1, String p, String n2, AttachmentSite site) {

@@ -33,7 +33,7 @@ class RankerSectionTest {
     }
 
     private static Map<String, byte[]> sectionsOf(TetherModel m) throws Exception {
-        return ModelFile.sections(m.normalizerVersion(), m.sources(), m.quadruples(), m.headChoice(), m.attachmentRanker().orElseThrow());
+        return ModelFile.sections(m.normalizerVersion(), m.sources(), m.quadruples(), m.headChoice(), m.attachmentRanker().orElseThrow(), null);
     }
 
     @Test

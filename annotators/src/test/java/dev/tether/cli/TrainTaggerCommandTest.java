@@ -1,0 +1,56 @@
+package dev.tether.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import dev.tether.model.ModelFile;
+import dev.tether.model.TetherModel;
+
+/** {@code tether train --conllu} trains the model's tagger from column 5, says what it used, and can be told not to. */
+class TrainTaggerCommandTest {
+    @TempDir
+    Path dir;
+
+    private static String fixture(String name) throws Exception {
+        return Path.of(TrainTaggerCommandTest.class.getResource("/dev/tether/preprocessing/" + name).toURI()).toString();
+    }
+
+    @Test
+    void aTreebankTrainsTheModelsTagger() throws Exception {
+        Path model = dir.resolve("ferry.tether");
+        CommandLineRun run = CommandLineRun.of("train", "--conllu", fixture("ferry-logs-tagged.conllu"), "--out", model.toString());
+        assertEquals(Tether.OK, run.exitCode(), run::toString);
+        assertTrue(run.out().contains("ferry-logs-tagged.conllu: 64 of 64 sentences for the tagger"), run::toString);
+        TetherModel m = ModelFile.read(model);
+        assertTrue(m.tagger().orElseThrow().description().contains("maximum entropy"), m.tagger()::toString);
+        CommandLineRun inspect = CommandLineRun.of("inspect", model.toString());
+        assertTrue(inspect.out().contains("tagger         OpenNLP") && inspect.out().contains("64 sentences"), inspect::toString);
+    }
+
+    @Test
+    void noTaggerLeavesTheShippedTaggerInUse() throws Exception {
+        Path model = dir.resolve("ferry.tether");
+        CommandLineRun run = CommandLineRun.of("train", "--conllu", fixture("ferry-logs-tagged.conllu"), "--no-tagger",
+                "--out", model.toString());
+        assertEquals(Tether.OK, run.exitCode(), run::toString);
+        assertTrue(ModelFile.read(model).tagger().isEmpty());
+        assertTrue(!run.out().contains("tagger:"), run::toString);
+        assertTrue(CommandLineRun.of("inspect", model.toString()).out().contains("tagger         none"));
+    }
+
+    @Test
+    void aTreebankWithoutTagsTrainsNoTaggerAndSaysSo() throws Exception {
+        Path model = dir.resolve("untagged.tether");
+        CommandLineRun run = CommandLineRun.of("train", "--conllu", fixture("ferry-logs-untagged.conllu"), "--out", model.toString());
+        assertEquals(Tether.OK, run.exitCode(), run::toString);
+        assertTrue(run.out().contains("ferry-logs-untagged.conllu: no sentence has a Penn Treebank tag for every word in column 5"),
+                run::toString);
+        assertTrue(run.out().contains("tagger: none trained") && run.out().contains("shipped OpenNLP tagger"), run::toString);
+        assertTrue(ModelFile.read(model).tagger().isEmpty());
+    }
+}
