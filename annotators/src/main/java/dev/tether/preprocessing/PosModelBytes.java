@@ -66,9 +66,10 @@ final class PosModelBytes {
         try {
             return new POSModel(new ByteArrayInputStream(section.bytes()));
         } catch (IOException | RuntimeException e) {
+            // Not chained: callers report the innermost message, and OpenNLP's own ("manifest is null") names no file.
             throw new IOException("the tagger section of " + section.origin() + " cannot be read as an OpenNLP "
-                    + "part-of-speech model (" + e.getMessage() + "); retrain the model with 'tether train', or with "
-                    + "--no-tagger to use the shipped tagger", e);
+                    + "part-of-speech model (" + e + "); retrain the model with 'tether train', or with "
+                    + "--no-tagger to use the shipped tagger");
         }
     }
 

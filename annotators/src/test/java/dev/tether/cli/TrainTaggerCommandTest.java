@@ -3,12 +3,16 @@ package dev.tether.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import dev.tether.model.ModelFile;
+import dev.tether.model.ModelTrainer;
+import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
 
 /** {@code tether train --conllu} trains the model's tagger from column 5, says what it used, and can be told not to. */
@@ -52,5 +56,18 @@ class TrainTaggerCommandTest {
                 run::toString);
         assertTrue(run.out().contains("tagger: none trained") && run.out().contains("shipped OpenNLP tagger"), run::toString);
         assertTrue(ModelFile.read(model).tagger().isEmpty());
+    }
+
+    @Test
+    void aModelWithDamagedTaggerBytesStopsAnnotationNamingTheFile() throws Exception {
+        Path model = dir.resolve("damaged-tagger.tether");
+        TaggerSection junk = new TaggerSection("junk", "not an OpenNLP model".getBytes(StandardCharsets.UTF_8), "test");
+        ModelFile.write(new ModelTrainer().withTagger(junk).build(), model);
+        Path doc = dir.resolve("log.txt");
+        Files.writeString(doc, "Replaced the gasket on the pump.");
+        CommandLineRun run = CommandLineRun.of("annotate", "--in", doc.toString(), "--out", dir.resolve("out").toString(),
+                "--model", model.toString());
+        assertEquals(Tether.INPUT, run.exitCode(), run::toString);
+        assertTrue(run.err().contains(model.toString()) && run.err().contains("tagger section"), run::toString);
     }
 }
