@@ -74,6 +74,11 @@ public final class HeadCandidateProposer {
             "many", "few", "much", "more", "less", "instance", "example", "good", "certain"};
     private static final String[] EXCEPTIVE_PRONOUNS = {
             "nothing", "anything", "everything", "all", "none", "nobody", "anybody", "everybody", "anyone", "everyone", "noone"};
+    /** First words of two-word prepositions ending in "of" that taggers read as adverbs ("out/RB of"). */
+    private static final String[] FIRST_OF_TWO_WORD_PREPOSITIONS = {"out", "because", "instead", "ahead", "outside", "inside"};
+    /** Prepositions that taggers read as particles or adverbs before a name or number ("closed on/RP Sunday"). */
+    private static final String[] PREPOSITIONS_READ_AS_PARTICLES = {
+            "on", "in", "at", "by", "for", "from", "with", "to", "into", "over", "through", "around", "after", "before", "since", "until"};
     private static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re"};
 
     // Word classes of Penn Treebank tags, as the rules above need them.
@@ -105,6 +110,7 @@ public final class HeadCandidateProposer {
         int to = Math.min(words.length, index + RIGHT_REACH + 2);
         byte[] kinds = new byte[to - from];
         for (int i = from; i < to; i++) kinds[i - from] = kind(pennTags[i]);
+        correctMisreadVerbs(words, pennTags, kinds, from);
         if (from == 0) correctOpeningVerb(words, pennTags, kinds);
         String[] windowWords = from == 0 && to == words.length ? words : java.util.Arrays.copyOfRange(words, from, to);
         PrepositionCandidates c = propose(windowWords, kinds, index - from);
@@ -140,10 +146,53 @@ public final class HeadCandidateProposer {
         }
     }
 
+    /**
+     * Taggers trained on web text sometimes tag a main verb after its subject as an adjective, or a word as
+     * punctuation ("BP shut/JJ its refinery", "prices advanced/JJ 53 cents", "Bush nominated/, two judges"). A word
+     * of letters tagged so, between a noun, name or pronoun and a determiner, possessive or number, is taken as a
+     * verb; any other word of letters tagged as punctuation is no clause break. A preposition tagged as a particle or
+     * adverb before a name or number ("closed on/RP Sunday"), and the first word of "out of" and the like tagged as
+     * an adverb, are taken as prepositions. (Measured on UD English EWT dev end
+     * to end with the EWT-trained tagger; see the class comment for the figures.) {@code kinds[k]} is the kind of
+     * {@code words[k + offset]}.
+     */
+    private static void correctMisreadVerbs(String[] words, String[] pennTags, byte[] kinds, int offset) {
+        for (int k = 0; k < kinds.length; k++) {
+            String tag = pennTags[k + offset];
+            boolean punctuationTag = ",".equals(tag) || ".".equals(tag) || ":".equals(tag);
+            String word = words[k + offset];
+            boolean adverbial = "RP".equals(tag) || "RB".equals(tag);
+            if (adverbial && k + 1 < kinds.length) {
+                String next = pennTags[k + 1 + offset];
+                boolean firstOfTwo = isOneOf(word, FIRST_OF_TWO_WORD_PREPOSITIONS) && "of".equalsIgnoreCase(words[k + 1 + offset]);
+                boolean beforeNameOrNumber = isOneOf(word, PREPOSITIONS_READ_AS_PARTICLES)
+                        && ("NNP".equals(next) || "NNPS".equals(next) || "CD".equals(next));
+                if (firstOfTwo || beforeNameOrNumber) kinds[k] = PREPOSITION;
+                continue;
+            }
+            if (!(punctuationTag || "JJ".equals(tag)) || !isWordOfLetters(word)) continue;
+            boolean afterSubject = k > 0 && (kinds[k - 1] == NOUN || kinds[k - 1] == PROPER || kinds[k - 1] == PRONOUN);
+            String next = k + 1 < kinds.length ? pennTags[k + 1 + offset] : "";
+            boolean objectFollows = "DT".equals(next) || "PRP$".equals(next) || "CD".equals(next);
+            if (afterSubject && objectFollows) {
+                kinds[k] = VERB;
+            } else if (punctuationTag) {
+                kinds[k] = OTHER;
+            }
+        }
+    }
+
+    private static boolean isWordOfLetters(String w) {
+        if (w.length() < 2) return false;
+        for (int i = 0; i < w.length(); i++) if (!Character.isLetter(w.charAt(i))) return false;
+        return true;
+    }
+
     private static byte[] classify(String[] words, String[] pennTags) {
         checkLengths(words, pennTags);
         byte[] kinds = new byte[words.length];
         for (int i = 0; i < kinds.length; i++) kinds[i] = kind(pennTags[i]);
+        correctMisreadVerbs(words, pennTags, kinds, 0);
         correctOpeningVerb(words, pennTags, kinds);
         return kinds;
     }
