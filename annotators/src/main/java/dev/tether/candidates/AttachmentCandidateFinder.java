@@ -22,6 +22,7 @@ import org.apache.uima.jcas.tcas.Annotation;
 import org.apache.uima.resource.ResourceInitializationException;
 import org.apache.uima.util.Level;
 
+import dev.tether.documents.DocumentLabel;
 import dev.tether.type.AttachmentAmbiguity;
 import dev.tether.type.QuadrupleCandidate;
 
@@ -129,17 +130,17 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         }
         List<AnnotationFS> sentenceList = new ArrayList<>(CasUtil.select(cas, types.sentenceType()));
         if (sentenceList.isEmpty()) {
-            throw missingInput(text, "no annotations of the sentence type '" + types.sentenceType().getName()
+            throw missingInput(cas, "no annotations of the sentence type '" + types.sentenceType().getName()
                     + "'; run a sentence splitter before this engine or set parameter '" + PARAM_SENTENCE_TYPE
                     + "' to the type your pipeline writes");
         }
         if (cas.getAnnotationIndex(types.tokenType()).size() == 0) {
-            throw missingInput(text, "no annotations of the token type '" + types.tokenType().getName()
+            throw missingInput(cas, "no annotations of the token type '" + types.tokenType().getName()
                     + "'; run a tokenizer before this engine or set parameter '" + PARAM_TOKEN_TYPE
                     + "' to the type your pipeline writes");
         }
         if (!anyTokenTagged(cas)) {
-            throw missingInput(text, "no part-of-speech tags: the feature path '" + types.tagPathText()
+            throw missingInput(cas, "no part-of-speech tags: the feature path '" + types.tagPathText()
                     + "' is empty on every token of type '" + types.tokenType().getName()
                     + "'; run a part-of-speech tagger before this engine or set parameter '" + PARAM_POS_FEATURE_PATH
                     + "' to the path that holds the tags");
@@ -151,7 +152,7 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
             if (tokens.size() > maxSentenceTokens) {
                 sentencesCut++;
                 getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getBegin() + "-"
-                        + sentence.getEnd() + " of " + describe(text) + " has " + tokens.size()
+                        + sentence.getEnd() + " of " + DocumentLabel.of(cas) + " has " + tokens.size()
                         + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS + "=" + maxSentenceTokens
                         + "; it is analysed in windows of that many tokens and no head is proposed across a window boundary");
             }
@@ -160,7 +161,7 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
             }
         }
         if (tally.untagged > 0) {
-            getLogger().log(Level.WARNING, tally.untagged + " of " + tally.tokens + " tokens of " + describe(text)
+            getLogger().log(Level.WARNING, tally.untagged + " of " + tally.tokens + " tokens of " + DocumentLabel.of(cas)
                     + " have no part-of-speech tag at '" + types.tagPathText() + "' (parameter "
                     + PARAM_POS_FEATURE_PATH + "); they were analysed as untagged and cannot be heads or objects");
         }
@@ -233,18 +234,9 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         ambiguities++;
     }
 
-    private AnalysisEngineProcessException missingInput(String text, String what) {
+    private AnalysisEngineProcessException missingInput(CAS cas, String what) {
         return new AnalysisEngineProcessException(MESSAGES, "problem",
-                new Object[] {getClass().getSimpleName() + ": " + describe(text) + " has " + what});
-    }
-
-    /** A short label for the document in messages: its length and first words. */
-    private static String describe(String text) {
-        String start = text.strip();
-        if (start.length() > 40) {
-            start = start.substring(0, 40) + "...";
-        }
-        return "the document of " + text.length() + " characters beginning \"" + start.replaceAll("\\s+", " ") + "\"";
+                new Object[] {getClass().getSimpleName() + ": " + DocumentLabel.of(cas) + " has " + what});
     }
 
     @Override

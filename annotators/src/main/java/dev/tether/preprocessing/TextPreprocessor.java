@@ -12,6 +12,7 @@ import org.apache.uima.jcas.JCas;
 import org.apache.uima.resource.ResourceInitializationException;
 import org.apache.uima.util.Level;
 
+import dev.tether.documents.DocumentLabel;
 import dev.tether.type.Chunk;
 import dev.tether.type.Sentence;
 import dev.tether.type.Token;
@@ -52,11 +53,11 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     private static final String MESSAGES = "dev.tether.preprocessing.PreprocessorMessages";
 
     /**
-     * Whether to write base chunks. Tether's own engines do not read them, and the chunker takes most of the
-     * preprocessing time, so a flow that only needs attachment decisions can switch it off.
+     * Whether to write base chunks. Off by default: Tether's own engines do not read them, and the chunker takes
+     * most of the preprocessing time. Switch it on for a later stage that reads {@link Chunk}s.
      */
     public static final String PARAM_CHUNK = "chunk";
-    @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "true")
+    @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "false")
     private boolean chunk;
 
     private SentenceDetectorME sentenceDetector;
@@ -98,9 +99,9 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         if (text == null || text.isBlank()) {
             return;
         }
-        for (Span sentence : sentenceDetector.sentPosDetect(text)) {
+        for (Span sentence : CodePointSpans.align(sentenceDetector.sentPosDetect(text), text)) {
             String sentenceText = sentence.getCoveredText(text).toString();
-            Span[] tokens = tokenizer.tokenizePos(sentenceText);
+            Span[] tokens = CodePointSpans.align(tokenizer.tokenizePos(sentenceText), sentenceText);
             if (tokens.length == 0) {
                 continue;
             }
@@ -109,7 +110,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
                 sentencesSplit++;
                 int windows = (tokens.length + maxSentenceTokens - 1) / maxSentenceTokens;
                 getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getStart() + "-"
-                        + sentence.getEnd() + " has " + tokens.length + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS
+                        + sentence.getEnd() + " of " + DocumentLabel.of(jcas.getCas()) + " has " + tokens.length + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS
                         + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
                         + " consecutive sentences of at most " + maxSentenceTokens + " tokens");
             }
