@@ -25,7 +25,7 @@ final class InspectCommand implements Command {
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of());
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of(), 1);
         if (a.positional().size() != 1) throw new UsageException("give one model file, or 'default'");
         String path = a.positional().get(0);
         TetherModel m = ModelLocator.load(path);
