@@ -2,8 +2,6 @@ package dev.tether.output;
 
 import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.OutputStream;
-import java.io.Writer;
 import java.io.StringWriter;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
@@ -126,13 +124,17 @@ public final class RunManifest implements AutoCloseable {
 
     private void append(String line) throws IOException {
         if (journal == null) {
-            journal = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE, StandardOpenOption.APPEND);
             // A killed run may have left a torn line: start on a line of our own.
-            if (journal.size() > 0) {
-                ByteBuffer last = ByteBuffer.allocate(1);
-                journal.read(last, journal.size() - 1);
-                if (last.get(0) != '\n') journal.write(ByteBuffer.wrap(new byte[] {'\n'}));
+            boolean tornLine = false;
+            if (Files.isRegularFile(file) && Files.size(file) > 0) {
+                try (FileChannel read = FileChannel.open(file, StandardOpenOption.READ)) {
+                    ByteBuffer last = ByteBuffer.allocate(1);
+                    read.read(last, read.size() - 1);
+                    tornLine = last.get(0) != '\n';
+                }
             }
+            journal = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE, StandardOpenOption.APPEND);
+            if (tornLine) journal.write(ByteBuffer.wrap(new byte[] {'\n'}));
         }
         journal.write(ByteBuffer.wrap(line.getBytes(StandardCharsets.UTF_8)));
         journal.force(false);
