@@ -21,6 +21,8 @@ import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Set;
 
 /**
@@ -84,7 +86,8 @@ final class AnnotateCommand implements Command {
         DocumentFiles.Listing listing = DocumentFiles.list(in);
         if (listing.documents().isEmpty()) {
             throw new IOException("no documents in " + in + ": looked for files ending in " + DocumentFiles.EXTENSION
-                    + " (any letter case)" + skippedText(listing) + "; give a folder of plain-text "
+                    + " (any letter case)" + (listing.skippedTotal() > 0 ? " (skipped: " + skippedText(listing) + ")" : "")
+                    + "; give a folder of plain-text "
                     + DocumentFiles.EXTENSION + " files, or one file");
         }
         TetherModel loaded = ModelLocator.load(model); // fails with the model's own message, before any output
@@ -113,7 +116,7 @@ final class AnnotateCommand implements Command {
 
         out.printf("annotated %,d of %,d documents (%,d reused from an earlier run), %,d attachment decisions, %.1f s%n",
                 result.complete(), total, result.reused(), result.decisions(), result.seconds());
-        if (listing.skippedTotal() > 0) out.println("skipped" + skippedText(listing).substring(" (skipped".length(), skippedText(listing).length() - 1));
+        if (listing.skippedTotal() > 0) out.println("skipped: " + skippedText(listing));
         if (result.temporaryRemoved() > 0) {
             out.printf("removed %,d temporary files left by an interrupted run%n", result.temporaryRemoved());
         }
@@ -130,27 +133,18 @@ final class AnnotateCommand implements Command {
         return Tether.OK;
     }
 
-    /** " (skipped: 3 with other endings, 1 hidden, 2 links)", or "" when nothing was skipped. */
+    /** "3 with other endings, 1 hidden, 2 symbolic links (not followed)": what the listing left out. */
     private static String skippedText(DocumentFiles.Listing listing) {
-        if (listing.skippedTotal() == 0) return "";
-        StringBuilder s = new StringBuilder(" (skipped:");
-        String sep = " ";
-        if (listing.skipped(DocumentFiles.Skip.OTHER_EXTENSION) > 0) {
-            s.append(sep).append(listing.skipped(DocumentFiles.Skip.OTHER_EXTENSION)).append(" with other endings");
-            sep = ", ";
-        }
-        if (listing.skipped(DocumentFiles.Skip.HIDDEN) > 0) {
-            s.append(sep).append(listing.skipped(DocumentFiles.Skip.HIDDEN)).append(" hidden");
-            sep = ", ";
-        }
-        if (listing.skipped(DocumentFiles.Skip.LINK) > 0) {
-            s.append(sep).append(listing.skipped(DocumentFiles.Skip.LINK)).append(" symbolic links (not followed)");
-            sep = ", ";
-        }
-        if (listing.skipped(DocumentFiles.Skip.UNREADABLE) > 0) {
-            s.append(sep).append(listing.skipped(DocumentFiles.Skip.UNREADABLE)).append(" unreadable or not regular files");
-        }
-        return s.append(")").toString();
+        List<String> parts = new ArrayList<>();
+        long other = listing.skipped(DocumentFiles.Skip.OTHER_EXTENSION);
+        long hidden = listing.skipped(DocumentFiles.Skip.HIDDEN);
+        long links = listing.skipped(DocumentFiles.Skip.LINK);
+        long unreadable = listing.skipped(DocumentFiles.Skip.UNREADABLE);
+        if (other > 0) parts.add(other + " with other endings");
+        if (hidden > 0) parts.add(hidden + " hidden");
+        if (links > 0) parts.add(links + " symbolic links (not followed)");
+        if (unreadable > 0) parts.add(unreadable + " unreadable or not regular files");
+        return String.join(", ", parts);
     }
 
     private static void writeSummary(Path file, CollectionRun.Settings settings, DocumentFiles.Listing listing,

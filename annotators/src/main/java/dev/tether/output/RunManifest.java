@@ -26,7 +26,7 @@ import com.fasterxml.jackson.core.JsonToken;
  * files have their final names, so a run that is killed at any moment leaves a manifest that lists exactly the
  * documents that need no work.
  *
- * <p>During a run, entries are appended and forced to disk as documents complete (a later line for the same
+ * <p>During a run, entries are appended as documents complete (a later line for the same
  * document replaces an earlier one; a line {@code {"doc":…,"removed":true}} withdraws it; a torn last line from a
  * killed run is ignored). At the end of the run the manifest is rewritten atomically, sorted by document, so a
  * finished run leaves the same manifest whatever the thread count or the number of interruptions.
@@ -83,7 +83,10 @@ public final class RunManifest implements AutoCloseable {
         return new TreeMap<>(entries);
     }
 
-    /** Records that {@code entry}'s outputs are complete; on disk before it returns. */
+    /**
+     * Records that {@code entry}'s outputs are complete (handed to the operating system before it returns; not forced
+     * to disk, see {@link AtomicFile}).
+     */
     public synchronized void complete(Entry entry) throws IOException {
         entries.put(entry.doc(), entry);
         append(line(entry));
@@ -137,7 +140,6 @@ public final class RunManifest implements AutoCloseable {
             if (tornLine) journal.write(ByteBuffer.wrap(new byte[] {'\n'}));
         }
         journal.write(ByteBuffer.wrap(line.getBytes(StandardCharsets.UTF_8)));
-        journal.force(false);
     }
 
     private static String line(Entry e) throws IOException {

@@ -25,10 +25,12 @@ import java.nio.file.Path;
 import java.security.DigestOutputStream;
 import java.security.MessageDigest;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -131,7 +133,7 @@ public final class CollectionRun {
     }
 
     private void removeDocumentsNoLongerInTheInput() throws IOException {
-        java.util.Set<String> current = new java.util.HashSet<>();
+        Set<String> current = new HashSet<>();
         for (Path p : listing.documents()) current.add(listing.name(p));
         for (RunManifest.Entry e : manifest.entries().values()) {
             if (!current.contains(e.doc())) {

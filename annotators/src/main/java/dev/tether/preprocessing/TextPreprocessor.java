@@ -110,8 +110,8 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
                 sentencesSplit++;
                 int windows = (tokens.length + maxSentenceTokens - 1) / maxSentenceTokens;
                 getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getStart() + "-"
-                        + sentence.getEnd() + " of " + DocumentLabel.of(jcas.getCas()) + " has " + tokens.length + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS
-                        + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
+                        + sentence.getEnd() + " of " + DocumentLabel.of(jcas.getCas()) + " has " + tokens.length
+                        + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
                         + " consecutive sentences of at most " + maxSentenceTokens + " tokens");
             }
             for (int start = 0; start < tokens.length; start += maxSentenceTokens) {
