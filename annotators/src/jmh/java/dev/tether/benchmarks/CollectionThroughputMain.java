@@ -5,18 +5,28 @@ import org.openjdk.jmh.runner.Runner;
 import org.openjdk.jmh.runner.options.CommandLineOptions;
 import org.openjdk.jmh.runner.options.OptionsBuilder;
 
+import java.util.Arrays;
 import java.util.Collection;
 
 /**
  * Runs {@link CollectionThroughput} and prints, from the one run, tokens per second of each variant, the gain of
  * the default pipeline over the chunked one (one thread each) and the gain of two threads over one. Tokens are
  * counted as {@link ResolutionThroughput} counts them. JMH options are passed through.
+ *
+ * <p>{@code interleaved ROUNDS} instead runs the three variants in turn, ROUNDS times (after one warm-up round), and
+ * prints the median time of each and the median of the per-round ratios. JMH measures one variant after the other,
+ * minutes apart; on a machine shared with other work the load changes in between, and interleaving keeps the
+ * variants of one round under the same load.
  */
 public final class CollectionThroughputMain {
     private CollectionThroughputMain() {
     }
 
     public static void main(String[] args) throws Exception {
+        if (args.length >= 1 && args[0].equals("interleaved")) {
+            interleaved(args.length > 1 ? Integer.parseInt(args[1]) : 5);
+            return;
+        }
         CommandLineOptions cli = new CommandLineOptions(args);
         Collection<RunResult> results = new Runner(new OptionsBuilder().parent(cli)
                 .include(CollectionThroughput.class.getSimpleName()).threads(1).build()).run();
@@ -30,19 +40,54 @@ public final class CollectionThroughputMain {
             else if (name.endsWith("oneThread")) one = ms;
             else if (name.endsWith("twoThreads")) two = ms;
         }
-        ResolutionThroughput counter = new ResolutionThroughput();
-        counter.conllu = "";
-        for (int i = 0; i + 1 < args.length; i++) {
-            if (args[i].equals("-p") && args[i + 1].startsWith("conllu=")) counter.conllu = args[i + 1].substring("conllu=".length());
+        report(ResolutionThroughputMain.countTokens(args), chunked, one, two, chunked / one, one / two);
+    }
+
+    private static void interleaved(int rounds) throws Exception {
+        CollectionThroughput b = new CollectionThroughput();
+        b.conllu = "";
+        b.setUp();
+        double[][] ms = new double[3][rounds];
+        try {
+            for (int round = -1; round < rounds; round++) {
+                for (int k = 0; k < 3; k++) {
+                    int variant = (k + Math.max(round, 0)) % 3; // rotate the order from round to round
+                    long start = System.nanoTime();
+                    if (variant == 0) b.chunkedOneThread();
+                    else if (variant == 1) b.oneThread();
+                    else b.twoThreads();
+                    if (round >= 0) ms[variant][round] = (System.nanoTime() - start) / 1e6;
+                }
+                if (round >= 0) {
+                    System.out.printf("round %d: chunked %.0f ms, 1 thread %.0f ms, 2 threads %.0f ms%n", round + 1,
+                            ms[0][round], ms[1][round], ms[2][round]);
+                }
+            }
+        } finally {
+            b.tearDown();
         }
-        counter.setUp();
-        counter.tearDown();
-        long tokens = counter.tokens;
+        double[] gain = new double[rounds];
+        double[] scaling = new double[rounds];
+        for (int r = 0; r < rounds; r++) {
+            gain[r] = ms[0][r] / ms[1][r];
+            scaling[r] = ms[1][r] / ms[2][r];
+        }
+        report(ResolutionThroughputMain.countTokens(new String[0]), median(ms[0]), median(ms[1]), median(ms[2]),
+                median(gain), median(scaling));
+    }
+
+    private static double median(double[] values) {
+        double[] v = values.clone();
+        Arrays.sort(v);
+        return v.length % 2 == 1 ? v[v.length / 2] : (v[v.length / 2 - 1] + v[v.length / 2]) / 2;
+    }
+
+    private static void report(long tokens, double chunked, double one, double two, double gain, double scaling) {
         System.out.printf("%ntokens per run: %,d (%d processors)%n", tokens, Runtime.getRuntime().availableProcessors());
         System.out.printf("annotate, chunker, 1 thread:    %8.1f ms = %,8.0f tokens/s%n", chunked, tokens / (chunked / 1000));
         System.out.printf("annotate, default, 1 thread:    %8.1f ms = %,8.0f tokens/s%n", one, tokens / (one / 1000));
         System.out.printf("annotate, default, 2 threads:   %8.1f ms = %,8.0f tokens/s%n", two, tokens / (two / 1000));
-        System.out.printf("default vs chunker (1 thread): %.2fx%n", chunked / one);
-        System.out.printf("2 threads vs 1 thread:         %.2fx%n", one / two);
+        System.out.printf("default vs chunker (1 thread): %.2fx%n", gain);
+        System.out.printf("2 threads vs 1 thread:         %.2fx%n", scaling);
     }
 }

@@ -35,7 +35,8 @@ public final class ResolutionThroughputMain {
         System.out.printf("finder + resolver share of the whole pipeline: %.1f%%%n", 100 * resolutionMs / wholeMs);
     }
 
-    private static long countTokens(String[] args) throws Exception {
+    /** Tokens over the documents of the benchmark's CoNLL-U file ({@code -p conllu=FILE}, else the default file). */
+    static long countTokens(String[] args) throws Exception {
         ResolutionThroughput state = new ResolutionThroughput();
         state.conllu = "";
         for (int i = 0; i + 1 < args.length; i++) {

@@ -76,18 +76,10 @@ class HostTagSetTest {
     /** Pairs from the UD project's English Penn-to-UPOS conversion table (universaldependencies.org, tagset conversion). */
     @Test
     void universalTagsMapToTheirPennCounterparts() {
-        assertEquals("NN", TagSet.UD.toPenn("NOUN", "pump"));
-        assertEquals("NNP", TagSet.UD.toPenn("PROPN", "Kittiwake"));
-        assertEquals("IN", TagSet.UD.toPenn("ADP", "with"));
-        assertEquals("IN", TagSet.UD.toPenn("SCONJ", "because"));
-        assertEquals("TO", TagSet.UD.toPenn("PART", "to"));
-        assertEquals("POS", TagSet.UD.toPenn("PART", "'s"));
-        assertEquals("MD", TagSet.UD.toPenn("AUX", "should"));
-        assertEquals("VB", TagSet.UD.toPenn("AUX", "was"));
-        assertEquals("CD", TagSet.UD.toPenn("NUM", "14"));
-        assertEquals(".", TagSet.UD.toPenn("PUNCT", "."));
-        assertEquals(",", TagSet.UD.toPenn("PUNCT", ","));
-        assertEquals("$", TagSet.UD.toPenn("SYM", "$"));
+        String[][] pairs = {{"NOUN", "pump", "NN"}, {"PROPN", "Kittiwake", "NNP"}, {"ADP", "with", "IN"},
+                {"SCONJ", "because", "IN"}, {"PART", "to", "TO"}, {"PART", "'s", "POS"}, {"AUX", "should", "MD"},
+                {"AUX", "was", "VB"}, {"NUM", "14", "CD"}, {"PUNCT", ".", "."}, {"PUNCT", ",", ","}, {"SYM", "$", "$"}};
+        for (String[] p : pairs) assertEquals(p[2], TagSet.UD.toPenn(p[0], p[1]), () -> p[0] + " " + p[1]);
         assertEquals("VBD", TagSet.PENN.toPenn("VBD", "replaced"));
     }
 }
