@@ -7,6 +7,7 @@ import org.openjdk.jmh.runner.options.OptionsBuilder;
 
 import java.util.Arrays;
 import java.util.Collection;
+import java.util.Map;
 
 /**
  * Runs {@link CollectionThroughput} and prints, from the one run, tokens per second of each variant, the gain of
@@ -30,16 +31,10 @@ public final class CollectionThroughputMain {
         CommandLineOptions cli = new CommandLineOptions(args);
         Collection<RunResult> results = new Runner(new OptionsBuilder().parent(cli)
                 .include(CollectionThroughput.class.getSimpleName()).threads(1).build()).run();
-        double chunked = Double.NaN;
-        double one = Double.NaN;
-        double two = Double.NaN;
-        for (RunResult r : results) {
-            String name = r.getParams().getBenchmark();
-            double ms = r.getPrimaryResult().getScore();
-            if (name.endsWith("chunkedOneThread")) chunked = ms;
-            else if (name.endsWith("oneThread")) one = ms;
-            else if (name.endsWith("twoThreads")) two = ms;
-        }
+        Map<String, Double> ms = ResolutionThroughputMain.scores(results);
+        double chunked = ms.getOrDefault("chunkedOneThread", Double.NaN);
+        double one = ms.getOrDefault("oneThread", Double.NaN);
+        double two = ms.getOrDefault("twoThreads", Double.NaN);
         report(ResolutionThroughputMain.countTokens(args), chunked, one, two, chunked / one, one / two);
     }
 
