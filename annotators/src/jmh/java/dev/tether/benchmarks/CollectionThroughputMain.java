@@ -43,19 +43,27 @@ public final class CollectionThroughputMain {
         b.conllu = "";
         b.setUp();
         double[][] ms = new double[3][rounds];
+        double[][] cpu = new double[3][rounds];
+        com.sun.management.OperatingSystemMXBean os =
+                (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         try {
             for (int round = -1; round < rounds; round++) {
                 for (int k = 0; k < 3; k++) {
                     int variant = (k + Math.max(round, 0)) % 3; // rotate the order from round to round
                     long start = System.nanoTime();
+                    long cpuStart = os.getProcessCpuTime();
                     if (variant == 0) b.chunkedOneThread();
                     else if (variant == 1) b.oneThread();
                     else b.twoThreads();
-                    if (round >= 0) ms[variant][round] = (System.nanoTime() - start) / 1e6;
+                    if (round >= 0) {
+                        ms[variant][round] = (System.nanoTime() - start) / 1e6;
+                        cpu[variant][round] = (os.getProcessCpuTime() - cpuStart) / 1e6;
+                    }
                 }
                 if (round >= 0) {
-                    System.out.printf("round %d: chunked %.0f ms, 1 thread %.0f ms, 2 threads %.0f ms%n", round + 1,
-                            ms[0][round], ms[1][round], ms[2][round]);
+                    System.out.printf("round %d: chunked %.0f ms (CPU %.0f ms), 1 thread %.0f ms (CPU %.0f ms), "
+                            + "2 threads %.0f ms (CPU %.0f ms)%n", round + 1, ms[0][round], cpu[0][round], ms[1][round],
+                            cpu[1][round], ms[2][round], cpu[2][round]);
                 }
             }
         } finally {
@@ -69,6 +77,13 @@ public final class CollectionThroughputMain {
         }
         report(ResolutionThroughputMain.countTokens(new String[0]), median(ms[0]), median(ms[1]), median(ms[2]),
                 median(gain), median(scaling));
+        // Process CPU time (all threads, GC and compiler included) does not depend on how much of the machine other
+        // work takes: the chunked/default ratio is the work saved; 2-thread CPU over 1-thread CPU is the cost of
+        // running two pipelines, which bounds what a second free core can give (2 / that ratio at best).
+        System.out.printf("CPU time: chunked %.0f ms, 1 thread %.0f ms, 2 threads %.0f ms (medians)%n",
+                median(cpu[0]), median(cpu[1]), median(cpu[2]));
+        System.out.printf("CPU work, chunked vs default:   %.2fx%n", median(cpu[0]) / median(cpu[1]));
+        System.out.printf("CPU work, 2 threads vs 1:       %.2fx%n", median(cpu[2]) / median(cpu[1]));
     }
 
     private static double median(double[] values) {
