@@ -6,6 +6,8 @@ import org.openjdk.jmh.runner.options.CommandLineOptions;
 import org.openjdk.jmh.runner.options.OptionsBuilder;
 
 import java.util.Collection;
+import java.util.HashMap;
+import java.util.Map;
 
 /**
  * Runs {@link ResolutionThroughput} and prints tokens per second for the finder plus resolver and for the whole
@@ -20,16 +22,10 @@ public final class ResolutionThroughputMain {
         CommandLineOptions cli = new CommandLineOptions(args);
         Collection<RunResult> results = new Runner(new OptionsBuilder().parent(cli)
                 .include(ResolutionThroughput.class.getSimpleName()).threads(1).build()).run();
-        double resolutionMs = Double.NaN;
-        double wholeMs = Double.NaN;
-        double countMs = Double.NaN;
-        for (RunResult r : results) {
-            String name = r.getParams().getBenchmark();
-            double ms = r.getPrimaryResult().getScore();
-            if (name.endsWith("finderAndResolver")) resolutionMs = ms;
-            if (name.endsWith("wholePipeline")) wholeMs = ms;
-            if (name.endsWith("finderAndCountScore")) countMs = ms;
-        }
+        Map<String, Double> ms = scores(results);
+        double resolutionMs = ms.getOrDefault("finderAndResolver", Double.NaN);
+        double wholeMs = ms.getOrDefault("wholePipeline", Double.NaN);
+        double countMs = ms.getOrDefault("finderAndCountScore", Double.NaN);
         long tokens = countTokens(args);
         System.out.printf("%ntokens per pass: %,d%n", tokens);
         System.out.printf("finder + resolver: %.1f ms per pass = %,.0f tokens/s (one thread)%n", resolutionMs, tokens / (resolutionMs / 1000));
@@ -39,7 +35,18 @@ public final class ResolutionThroughputMain {
         System.out.printf("finder + resolver share of the whole pipeline: %.1f%%%n", 100 * resolutionMs / wholeMs);
     }
 
-    private static long countTokens(String[] args) throws Exception {
+    /** Each benchmark method's score (its simple name → milliseconds per operation). */
+    static Map<String, Double> scores(Collection<RunResult> results) {
+        Map<String, Double> scores = new HashMap<>();
+        for (RunResult r : results) {
+            String name = r.getParams().getBenchmark();
+            scores.put(name.substring(name.lastIndexOf('.') + 1), r.getPrimaryResult().getScore());
+        }
+        return scores;
+    }
+
+    /** Tokens over the documents of the benchmark's CoNLL-U file ({@code -p conllu=FILE}, else the default file). */
+    static long countTokens(String[] args) throws Exception {
         ResolutionThroughput state = new ResolutionThroughput();
         state.conllu = "";
         for (int i = 0; i + 1 < args.length; i++) {

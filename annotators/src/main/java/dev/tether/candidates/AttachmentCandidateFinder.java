@@ -22,6 +22,7 @@ import org.apache.uima.jcas.tcas.Annotation;
 import org.apache.uima.resource.ResourceInitializationException;
 import org.apache.uima.util.Level;
 
+import dev.tether.documents.DocumentLabel;
 import dev.tether.type.AttachmentAmbiguity;
 import dev.tether.type.QuadrupleCandidate;
 
@@ -35,7 +36,8 @@ import dev.tether.type.QuadrupleCandidate;
  * <p><b>Host types.</b> Sentences, tokens and tags are read from Tether's own types (written by the built-in
  * preprocessing) or from the host pipeline's types, named by {@link #PARAM_SENTENCE_TYPE}, {@link #PARAM_TOKEN_TYPE}
  * and {@link #PARAM_POS_FEATURE_PATH}; see {@link HostTypeMapping}. The annotations written point at the host's own
- * token annotations. Tags are expected from the Penn Treebank tag set (Marcus et al. 1993).
+ * token annotations. Tags may come from the Penn Treebank tag set (Marcus et al. 1993) or the Universal Dependencies
+ * UPOS set ({@link #PARAM_TAGSET}; {@link TagSet}).
  *
  * <p><b>Missing input.</b> A configured type or feature that the type system lacks fails when the type system is
  * first seen; a document with text but no sentences, no tokens, or no tags fails with an error naming the type and
@@ -80,11 +82,23 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
     private int maxSentenceTokens;
 
+    /**
+     * Tag set of the host's part-of-speech tags: {@code penn} (Penn Treebank), {@code ud} (Universal Dependencies
+     * UPOS: NOUN, VERB, ADP ...) or {@code auto} (per document, whichever most tags belong to). UD tags are mapped to
+     * Penn tags ({@link TagSet}). When most of a document's tags belong to neither (or not to the set named), one
+     * warning per document names the feature path and examples of the tags seen.
+     */
+    public static final String PARAM_TAGSET = "tagset";
+    @ConfigurationParameter(name = PARAM_TAGSET, mandatory = true, defaultValue = "auto")
+    private String tagsetName;
+
     /** Resource bundle of this engine's exception messages (UIMA exceptions take their message from a bundle). */
     private static final String MESSAGES = "dev.tether.candidates.FinderMessages";
 
     private final HeadCandidateProposer proposer = new HeadCandidateProposer();
     private HostTypeMapping types;
+    /** The configured tag set, or {@code null} for {@code auto}. */
+    private TagSet configuredTags;
 
     private long documents;
     private long sentences;
@@ -99,6 +113,12 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
             throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {"Parameter "
                     + PARAM_MAX_SENTENCE_TOKENS + " of " + getClass().getSimpleName()
                     + " must be at least 2 (a preposition and its object), was " + maxSentenceTokens});
+        }
+        try {
+            configuredTags = TagSet.parameter(tagsetName, PARAM_TAGSET);
+        } catch (IllegalArgumentException e) {
+            throw new ResourceInitializationException(MESSAGES, "problem", new Object[] {getClass().getSimpleName()
+                    + ": " + e.getMessage()});
         }
     }
 
@@ -129,29 +149,30 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         }
         List<AnnotationFS> sentenceList = new ArrayList<>(CasUtil.select(cas, types.sentenceType()));
         if (sentenceList.isEmpty()) {
-            throw missingInput(text, "no annotations of the sentence type '" + types.sentenceType().getName()
+            throw missingInput(cas, "no annotations of the sentence type '" + types.sentenceType().getName()
                     + "'; run a sentence splitter before this engine or set parameter '" + PARAM_SENTENCE_TYPE
                     + "' to the type your pipeline writes");
         }
         if (cas.getAnnotationIndex(types.tokenType()).size() == 0) {
-            throw missingInput(text, "no annotations of the token type '" + types.tokenType().getName()
+            throw missingInput(cas, "no annotations of the token type '" + types.tokenType().getName()
                     + "'; run a tokenizer before this engine or set parameter '" + PARAM_TOKEN_TYPE
                     + "' to the type your pipeline writes");
         }
         if (!anyTokenTagged(cas)) {
-            throw missingInput(text, "no part-of-speech tags: the feature path '" + types.tagPathText()
+            throw missingInput(cas, "no part-of-speech tags: the feature path '" + types.tagPathText()
                     + "' is empty on every token of type '" + types.tokenType().getName()
                     + "'; run a part-of-speech tagger before this engine or set parameter '" + PARAM_POS_FEATURE_PATH
                     + "' to the path that holds the tags");
         }
         DocumentTally tally = new DocumentTally();
+        tally.tags = tagSetOf(cas);
         for (AnnotationFS sentence : sentenceList) {
             List<AnnotationFS> tokens = CasUtil.selectCovered(cas, types.tokenType(), sentence);
             sentences++;
             if (tokens.size() > maxSentenceTokens) {
                 sentencesCut++;
                 getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getBegin() + "-"
-                        + sentence.getEnd() + " of " + describe(text) + " has " + tokens.size()
+                        + sentence.getEnd() + " of " + DocumentLabel.of(cas) + " has " + tokens.size()
                         + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS + "=" + maxSentenceTokens
                         + "; it is analysed in windows of that many tokens and no head is proposed across a window boundary");
             }
@@ -160,7 +181,7 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
             }
         }
         if (tally.untagged > 0) {
-            getLogger().log(Level.WARNING, tally.untagged + " of " + tally.tokens + " tokens of " + describe(text)
+            getLogger().log(Level.WARNING, tally.untagged + " of " + tally.tokens + " tokens of " + DocumentLabel.of(cas)
                     + " have no part-of-speech tag at '" + types.tagPathText() + "' (parameter "
                     + PARAM_POS_FEATURE_PATH + "); they were analysed as untagged and cannot be heads or objects");
         }
@@ -176,6 +197,28 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         return false;
     }
 
+    /**
+     * The tag set of this document's tags: the configured one, or for {@code auto} the one most tags belong to. Warns
+     * once when most tags belong to neither set (or not to the configured one).
+     */
+    private TagSet tagSetOf(CAS cas) {
+        TagCensus census = new TagCensus();
+        for (AnnotationFS token : cas.getAnnotationIndex(types.tokenType())) {
+            String tag = types.tagOf(token);
+            if (tag != null) census.add(tag);
+        }
+        TagSet chosen = configuredTags != null ? configuredTags : census.likeliest();
+        if (!census.matches(chosen)) {
+            getLogger().log(Level.WARNING, "The part-of-speech tags of " + DocumentLabel.of(cas) + " at feature path '"
+                    + types.tagPathText() + "' of " + types.tokenType().getName() + " are mostly not "
+                    + (configuredTags != null ? "from the " + chosen + " tag set" : "Penn Treebank or Universal Dependencies tags")
+                    + " (examples: " + String.join(", ", census.examples()) + "); few or no prepositions will be found. "
+                    + "Set parameter '" + PARAM_POS_FEATURE_PATH + "' to the feature that holds the tags, or '"
+                    + PARAM_TAGSET + "' to penn, ud or auto");
+        }
+        return chosen;
+    }
+
     /** Proposes candidates for one window of tokens and writes the annotations. */
     private void analyse(JCas jcas, List<AnnotationFS> tokens, DocumentTally tally) {
         int n = tokens.size();
@@ -189,7 +232,7 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
                 tally.untagged++;
                 tag = "";
             }
-            tags[i] = tag;
+            tags[i] = tally.tags.toPenn(tag, words[i]);
         }
         tally.tokens += n;
         for (PrepositionCandidates found : proposer.proposeAll(words, tags)) {
@@ -237,18 +280,9 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
         ambiguities++;
     }
 
-    private AnalysisEngineProcessException missingInput(String text, String what) {
+    private AnalysisEngineProcessException missingInput(CAS cas, String what) {
         return new AnalysisEngineProcessException(MESSAGES, "problem",
-                new Object[] {getClass().getSimpleName() + ": " + describe(text) + " has " + what});
-    }
-
-    /** A short label for the document in messages: its length and first words. */
-    private static String describe(String text) {
-        String start = text.strip();
-        if (start.length() > 40) {
-            start = start.substring(0, 40) + "...";
-        }
-        return "the document of " + text.length() + " characters beginning \"" + start.replaceAll("\\s+", " ") + "\"";
+                new Object[] {getClass().getSimpleName() + ": " + DocumentLabel.of(cas) + " has " + what});
     }
 
     @Override
@@ -263,5 +297,6 @@ public class AttachmentCandidateFinder extends CasAnnotator_ImplBase {
     private static final class DocumentTally {
         long tokens;
         long untagged;
+        TagSet tags;
     }
 }

@@ -10,6 +10,11 @@ interface Command {
     /** One line: the command and its options. */
     String usage();
 
+    /** What {@code tether <name> --help} prints: the usage line, what the command does, and every option. */
+    default String help() {
+        return "usage: tether " + usage() + "\n";
+    }
+
     /** Runs with the whole argument vector ({@code args[0]} is the command name); returns the exit code. */
     int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException;
 }

@@ -8,17 +8,26 @@ import java.util.Set;
 
 /**
  * Parses {@code --name value...} options and positional words. An option takes every following word up to the next
- * option; flags (declared up front) take none. Unknown options are errors, so a typo never passes silently.
+ * option; flags (declared up front) take none. Everything else is an error, so a typo never passes silently: an
+ * unknown option, a single-dash word ({@code -v}, {@code -json}: Tether's options have two dashes), and a
+ * positional word where the command takes none (or more of them than it takes).
  */
 final class CommandArguments {
     private final Map<String, List<String>> options = new LinkedHashMap<>();
     private final List<String> positional = new ArrayList<>();
 
+    /** A command that takes no positional words. */
     CommandArguments(String command, String[] args, int from, Set<String> valued, Set<String> flags) throws UsageException {
+        this(command, args, from, valued, flags, 0);
+    }
+
+    /** A command that takes up to {@code maxPositional} positional words before its options. */
+    CommandArguments(String command, String[] args, int from, Set<String> valued, Set<String> flags, int maxPositional)
+            throws UsageException {
         String current = null;
         for (int i = from; i < args.length; i++) {
             String a = args[i];
-            if (a.startsWith("--")) {
+            if (a.startsWith("--") && a.length() > 2) {
                 String name = a.substring(2);
                 if (flags.contains(name)) {
                     options.put(name, List.of());
@@ -30,10 +39,19 @@ final class CommandArguments {
                     throw new UsageException("'" + command + "' has no option --" + name + "; options: "
                             + String.join(", ", describe(valued, flags)));
                 }
+            } else if (a.startsWith("-") && a.length() > 1 && !(current != null && a.matches("-[0-9.]+"))) {
+                String hint = a.startsWith("--") ? "" : valued.contains(a.substring(1)) || flags.contains(a.substring(1))
+                        ? "; did you mean -" + a + "?" : "; Tether's options start with two dashes";
+                throw new UsageException("'" + a + "' is not an option of '" + command + "'" + hint
+                        + " (a file whose name starts with a dash can be given as ./" + a + ")");
             } else if (current != null) {
                 options.get(current).add(a);
-            } else {
+            } else if (positional.size() < maxPositional) {
                 positional.add(a);
+            } else {
+                throw new UsageException("unexpected word '" + a + "'"
+                        + (maxPositional == 0 ? ": '" + command + "' takes only options" : "")
+                        + "; options: " + String.join(", ", describe(valued, flags)));
             }
         }
         for (String name : valued) {
@@ -70,6 +88,19 @@ final class CommandArguments {
         String v = value(name, null);
         if (v == null) throw new UsageException("--" + name + " is required");
         return v;
+    }
+
+    /** The value of {@code name} as a whole number of at least {@code min}, or {@code fallback} when absent. */
+    int integer(String name, int min, int fallback) throws UsageException {
+        String v = value(name, null);
+        if (v == null) return fallback;
+        try {
+            int n = Integer.parseInt(v);
+            if (n >= min) return n;
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new UsageException("--" + name + " takes a whole number of at least " + min + ", got '" + v + "'");
     }
 
     List<String> positional() {

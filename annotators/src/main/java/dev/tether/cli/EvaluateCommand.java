@@ -33,6 +33,19 @@ final class EvaluateCommand implements Command {
     }
 
     @Override
+    public String help() {
+        return "usage: tether " + usage() + "\n\n"
+                + "Measures accuracy on labelled data, with baselines computed in the same run.\n\n"
+                + "  --model MODEL|default  the model to evaluate\n"
+                + "  --quadruples FILE      labelled quadruples (benchmark or Tether format): accuracy, both baselines,\n"
+                + "                         lexical association, accuracy by back-off level\n"
+                + "  --skip-malformed       skip and count quadruple lines that do not parse\n"
+                + "  --conllu FILE          a treebank: the whole pipeline on its '# text' lines, scored against the trees\n"
+                + "  --gold-tags            with --conllu: use the treebank's own tokens and tags instead\n"
+                + "  --json                 print one JSON object instead of text\n";
+    }
+
+    @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu"), Set.of("json", "skip-malformed", "gold-tags"));
         String modelLocation = a.value("model", ModelLocator.DEFAULT);

@@ -24,8 +24,17 @@ final class InspectCommand implements Command {
     }
 
     @Override
+    public String help() {
+        return "usage: tether " + usage() + "\n\n"
+                + "Shows what a model file holds: its id, format and normalization versions, the training sources with\n"
+                + "their checksums, the vocabulary, the distinct keys of every back-off level, and the approximate heap.\n\n"
+                + "  MODEL     a model file written by 'tether train'\n"
+                + "  default   the shipped default model\n";
+    }
+
+    @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of());
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of(), 1);
         if (a.positional().size() != 1) throw new UsageException("give one model file, or 'default'");
         String path = a.positional().get(0);
         TetherModel m = ModelLocator.load(path);

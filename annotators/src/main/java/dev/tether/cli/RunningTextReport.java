@@ -35,7 +35,7 @@ final class RunningTextReport {
             e = new RunningTextEvaluator(pipeline, model).evaluate(conllu);
             pipeline.destroy();
         } catch (ResourceInitializationException | AnalysisEngineProcessException ex) {
-            throw new IOException("the pipeline failed on " + conllu + ": " + AnnotateCommand.rootMessage(ex), ex);
+            throw new IOException("the pipeline failed on " + conllu + ": " + dev.tether.pipeline.CollectionRun.rootMessage(ex), ex);
         }
         if (json) {
             writeJson(out, conllu, e);

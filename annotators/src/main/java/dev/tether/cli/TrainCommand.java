@@ -43,6 +43,18 @@ final class TrainCommand implements Command {
     }
 
     @Override
+    public String help() {
+        return "usage: tether " + usage() + "\n\n"
+                + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n\n"
+                + "  --quadruples FILE...  labelled quadruples: 'id verb noun1 preposition noun2 V|N' per line, or\n"
+                + "                        Tether's tab-separated format with a header\n"
+                + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz)\n"
+                + "  --base MODEL|default  start from the counts of an existing model\n"
+                + "  --skip-malformed      skip and count lines that do not parse (default: stop at the first)\n"
+                + "  --out MODEL           the model file to write (atomically)\n";
+    }
+
+    @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out", "ranker-without"),
                 Set.of("skip-malformed", "no-ranker", "no-tagger"));

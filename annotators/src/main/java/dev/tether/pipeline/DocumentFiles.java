@@ -1,29 +1,120 @@
 package dev.tether.pipeline;
 
 import java.io.IOException;
+import java.nio.file.FileVisitOption;
+import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
-import java.util.stream.Collectors;
-import java.util.stream.Stream;
+import java.util.Locale;
 
 /**
- * The documents under an input path: the file itself (whatever its name), or every regular, non-hidden {@code .txt}
- * file below a folder, in sorted order.
+ * The documents under an input path, and what was left out.
+ *
+ * <ul>
+ *   <li>A file given directly is the one document, whatever its name (a link to a file is followed).</li>
+ *   <li>A folder given directly is followed even when the path is a symbolic link; below it, every regular file whose
+ *       name ends in {@value #EXTENSION} in any letter case ({@code .txt}, {@code .TXT}) is a document, in sorted
+ *       order of its path.</li>
+ *   <li>Left out and counted, never dropped silently: files with other endings, hidden files and folders (name
+ *       starting with a dot; a hidden folder counts once), symbolic links inside the folder (not followed: they may
+ *       loop or leave the folder), and entries that cannot be read.</li>
+ * </ul>
  */
 public final class DocumentFiles {
+    /** The file ending of documents in a folder, compared without regard to letter case. */
+    public static final String EXTENSION = ".txt";
+
     private DocumentFiles() {
     }
 
-    public static List<Path> under(Path input) throws IOException {
-        if (!Files.exists(input)) throw new NoSuchFileException(input + " does not exist; give a text file or a folder of them");
-        if (Files.isRegularFile(input)) return List.of(input);
-        try (Stream<Path> all = Files.walk(input)) {
-            return all.filter(Files::isRegularFile)
-                    .filter(p -> !p.getFileName().toString().startsWith(".") && p.getFileName().toString().endsWith(".txt"))
-                    .sorted()
-                    .collect(Collectors.toList());
+    /** Why an entry below the input folder is not a document. */
+    public enum Skip {
+        OTHER_EXTENSION("other-extension"), HIDDEN("hidden"), LINK("link"), UNREADABLE("unreadable");
+
+        private final String label;
+
+        Skip(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
         }
     }
+
+    /**
+     * The documents in sorted order, the folder their names are relative to, and the count of each kind of skipped
+     * entry (indexed by {@link Skip#ordinal()}).
+     */
+    public record Listing(Path base, List<Path> documents, long[] skipped) {
+        public long skipped(Skip kind) {
+            return skipped[kind.ordinal()];
+        }
+
+        public long skippedTotal() {
+            long n = 0;
+            for (long s : skipped) n += s;
+            return n;
+        }
+
+        /** The document's name: its path relative to the input folder, with {@code /} between folders. */
+        public String name(Path document) {
+            return base.relativize(document).toString().replace('\\', '/');
+        }
+    }
+
+    public static Listing list(Path input) throws IOException {
+        if (!Files.exists(input)) {
+            throw new NoSuchFileException(input.toString(), null, "does not exist; give a text file or a folder of them");
+        }
+        long[] skipped = new long[Skip.values().length];
+        if (!Files.isDirectory(input)) {
+            Path file = input.toAbsolutePath().normalize();
+            return new Listing(file.getParent(), List.of(file), skipped);
+        }
+        Path root = input.toRealPath();
+        List<Path> documents = new ArrayList<>();
+        Files.walkFileTree(root, EnumSet.noneOf(FileVisitOption.class), Integer.MAX_VALUE, new SimpleFileVisitor<>() {
+            @Override
+            public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
+                if (!dir.equals(root) && hidden(dir)) {
+                    skipped[Skip.HIDDEN.ordinal()]++;
+                    return FileVisitResult.SKIP_SUBTREE;
+                }
+                return FileVisitResult.CONTINUE;
+            }
+
+            @Override
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+                Skip why;
+                if (attrs.isSymbolicLink()) why = Skip.LINK;
+                else if (hidden(file)) why = Skip.HIDDEN;
+                else if (!attrs.isRegularFile()) why = Skip.UNREADABLE;
+                else if (!file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(EXTENSION)) why = Skip.OTHER_EXTENSION;
+                else why = null;
+                if (why == null) documents.add(file);
+                else skipped[why.ordinal()]++;
+                return FileVisitResult.CONTINUE;
+            }
+
+            @Override
+            public FileVisitResult visitFileFailed(Path file, IOException e) {
+                skipped[(Files.isSymbolicLink(file) ? Skip.LINK : Skip.UNREADABLE).ordinal()]++;
+                return FileVisitResult.CONTINUE;
+            }
+        });
+        documents.sort(null);
+        return new Listing(root, List.copyOf(documents), skipped);
+    }
+
+    private static boolean hidden(Path p) {
+        return p.getFileName() != null && p.getFileName().toString().startsWith(".");
+    }
+
 }

@@ -7,13 +7,26 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-/** Reads a document as UTF-8 text; refuses binary files and invalid UTF-8 with a message naming the file and line. */
+/**
+ * Reads a document as UTF-8 text; refuses binary files and invalid UTF-8 with a message naming the file and line.
+ *
+ * <p>A byte-order mark at the start (EF BB BF) is not part of the text: it is dropped, so the document text, and
+ * every offset into it, starts at the first character after it. Any other valid UTF-8 is kept as it is, characters
+ * outside the Basic Multilingual Plane included. Two code points are refused because no XML version can carry them
+ * and the document could not be written as XMI: the noncharacters U+FFFE and U+FFFF.
+ */
 public final class DocumentText {
+    private static final char BYTE_ORDER_MARK = '\uFEFF';
+
     private DocumentText() {
     }
 
     public static String read(Path file) throws IOException {
-        byte[] bytes = Files.readAllBytes(file);
+        return decode(file, Files.readAllBytes(file));
+    }
+
+    /** The text of {@code bytes}, read from {@code file}. */
+    public static String decode(Path file, byte[] bytes) throws IOException {
         int line = 1;
         for (byte b : bytes) {
             if (b == 0) {
@@ -22,6 +35,16 @@ public final class DocumentText {
             if (b == '\n') line++;
         }
         String text = Utf8Text.decode(file, bytes);
-        return !text.isEmpty() && text.charAt(0) == '\uFEFF' ? text.substring(1) : text;
+        if (!text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK) text = text.substring(1);
+        line = 1;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n') line++;
+            if (c == '\uFFFE' || c == '\uFFFF') {
+                throw new InputFormatException(file, line, String.format("holds the noncharacter U+%04X, which XMI "
+                        + "(XML) cannot carry; remove it from the text", (int) c));
+            }
+        }
+        return text;
     }
 }

@@ -13,6 +13,7 @@ import org.apache.uima.jcas.JCas;
 import org.apache.uima.resource.ResourceInitializationException;
 import org.apache.uima.util.Level;
 
+import dev.tether.documents.DocumentLabel;
 import dev.tether.model.LoadedModels;
 import dev.tether.model.ModelHolder;
 import dev.tether.model.TetherModel;
@@ -62,11 +63,11 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     private static final String MESSAGES = "dev.tether.preprocessing.PreprocessorMessages";
 
     /**
-     * Whether to write base chunks. Tether's own engines do not read them, and the chunker takes most of the
-     * preprocessing time, so a flow that only needs attachment decisions can switch it off.
+     * Whether to write base chunks. Off by default: Tether's own engines do not read them, and the chunker takes
+     * most of the preprocessing time. Switch it on for a later stage that reads {@link Chunk}s.
      */
     public static final String PARAM_CHUNK = "chunk";
-    @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "true")
+    @ConfigurationParameter(name = PARAM_CHUNK, mandatory = true, defaultValue = "false")
     private boolean chunk;
 
     /**
@@ -132,9 +133,9 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         if (text == null || text.isBlank()) {
             return;
         }
-        for (Span sentence : sentenceDetector.sentPosDetect(text)) {
+        for (Span sentence : CodePointSpans.align(sentenceDetector.sentPosDetect(text), text)) {
             String sentenceText = sentence.getCoveredText(text).toString();
-            Span[] tokens = tokenizer.tokenizePos(sentenceText);
+            Span[] tokens = CodePointSpans.align(tokenizer.tokenizePos(sentenceText), sentenceText);
             if (tokens.length == 0) {
                 continue;
             }
@@ -143,8 +144,8 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
                 sentencesSplit++;
                 int windows = (tokens.length + maxSentenceTokens - 1) / maxSentenceTokens;
                 getLogger().log(Level.WARNING, "Sentence at characters " + sentence.getStart() + "-"
-                        + sentence.getEnd() + " has " + tokens.length + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS
-                        + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
+                        + sentence.getEnd() + " of " + DocumentLabel.of(jcas.getCas()) + " has " + tokens.length
+                        + " tokens, more than " + PARAM_MAX_SENTENCE_TOKENS + "=" + maxSentenceTokens + "; it is tagged and written as " + windows
                         + " consecutive sentences of at most " + maxSentenceTokens + " tokens");
             }
             for (int start = 0; start < tokens.length; start += maxSentenceTokens) {

@@ -72,7 +72,8 @@ class EngineDescriptorTest {
         Type token = cas.getTypeSystem().getType("dev.tether.type.Token");
         assertEquals(11, cas.getAnnotationIndex(token).size());
         assertEquals(1, cas.getAnnotationIndex(cas.getTypeSystem().getType("dev.tether.type.Sentence")).size());
-        assertFalse(cas.getAnnotationIndex(cas.getTypeSystem().getType("dev.tether.type.Chunk")).isEmpty());
+        // Chunks only when asked (parameter chunk, off by default).
+        assertTrue(cas.getAnnotationIndex(cas.getTypeSystem().getType("dev.tether.type.Chunk")).isEmpty());
     }
 
     @Test

@@ -2,6 +2,7 @@ package dev.tether.preprocessing;
 
 import static org.apache.uima.fit.factory.AnalysisEngineFactory.createEngine;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -36,7 +37,7 @@ class TextPreprocessorTest {
 
     @Test
     void writesSentencesPennTaggedTokensAndChunks() throws Exception {
-        AnalysisEngine preprocessor = createEngine(TextPreprocessor.class);
+        AnalysisEngine preprocessor = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, true);
         JCas jcas = preprocessor.newJCas();
         jcas.setDocumentText("The engineer replaced the gasket on the port engine with a spare from the stores. "
                 + "The deckhand checked the bilge pump before departure.");
@@ -71,11 +72,11 @@ class TextPreprocessorTest {
     }
 
     @Test
-    void chunkingCanBeSwitchedOffWithoutLosingSentencesOrTags() throws Exception {
+    void chunksOnlyWhenAskedAndSentencesAndTagsAreTheSameEitherWay() throws Exception {
         String text = "The engineer replaced the gasket on the port engine with a spare from the stores. "
                 + "The deckhand checked the bilge pump before departure.";
-        AnalysisEngine withChunks = createEngine(TextPreprocessor.class);
-        AnalysisEngine withoutChunks = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false);
+        AnalysisEngine withChunks = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, true);
+        AnalysisEngine withoutChunks = createEngine(TextPreprocessor.class); // the default: no chunker
         JCas a = withChunks.newJCas();
         a.setDocumentText(text);
         withChunks.process(a);
@@ -84,6 +85,7 @@ class TextPreprocessorTest {
         withoutChunks.process(b);
 
         assertTrue(JCasUtil.select(b, Chunk.class).isEmpty());
+        assertFalse(JCasUtil.select(a, Chunk.class).isEmpty());
         assertEquals(2, JCasUtil.select(b, Sentence.class).size());
         List<String> tagged = JCasUtil.select(a, Token.class).stream().map(t -> t.getCoveredText() + "/" + t.getPos()).toList();
         assertEquals(tagged, JCasUtil.select(b, Token.class).stream().map(t -> t.getCoveredText() + "/" + t.getPos()).toList());
@@ -111,7 +113,7 @@ class TextPreprocessorTest {
         }
         int window = 300;
         AnalysisEngine preprocessor = createEngine(TextPreprocessor.class,
-                TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, window);
+                TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, window, TextPreprocessor.PARAM_CHUNK, true);
         JCas jcas = preprocessor.newJCas();
         jcas.setDocumentText(text.toString());
 
