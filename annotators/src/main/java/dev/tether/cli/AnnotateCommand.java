@@ -36,6 +36,8 @@ import java.util.Set;
  */
 final class AnnotateCommand implements Command {
     static final String SUMMARY = "run-summary.json";
+    /** Folder of the HTML report inside the output folder, with {@code --report}. */
+    static final String REPORT = "report";
 
     @Override
     public String name() {
@@ -44,12 +46,12 @@ final class AnnotateCommand implements Command {
 
     @Override
     public String usage() {
-        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default]";
+        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--report]";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model"), Set.of());
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model"), Set.of("report"));
         Path in = Path.of(a.required("in"));
         Path outDir = Path.of(a.required("out"));
         String model = a.value("model", ModelLocator.DEFAULT);
@@ -60,7 +62,7 @@ final class AnnotateCommand implements Command {
         Path base = Files.isDirectory(in) ? in : in.toAbsolutePath().getParent();
         Files.createDirectories(outDir);
 
-        ModelLocator.load(model); // fail early, with the model's own message, before building the pipeline
+        String modelId = ModelLocator.load(model).id(); // fail early, with the model's own message, before building the pipeline
         AnalysisEngine engine;
         JCas jcas;
         try {
@@ -110,23 +112,26 @@ final class AnnotateCommand implements Command {
         }
         engine.destroy();
         double seconds = (System.nanoTime() - start) / 1e9;
-        writeSummary(outDir.resolve(SUMMARY), model, files.size(), written, decisions, characters, seconds, failed);
+        writeSummary(outDir.resolve(SUMMARY), model, modelId, files.size(), written, decisions, characters, seconds, failed);
         out.printf("annotated %,d of %,d documents, %,d attachment decisions, %.1f s%n", written, files.size(), decisions, seconds);
         out.printf("output: %s  (per document: .xmi and .ledger.jsonl; summary: %s)%n", outDir, SUMMARY);
+        int reported = a.has("report") ? AuditCommand.report(outDir, outDir.resolve(REPORT), -1, null, out, err) : Tether.OK;
         if (!failed.isEmpty()) {
             out.printf("%,d documents failed:%n", failed.size());
             failed.forEach((doc, why) -> out.println("  " + doc + ": " + why));
             return Tether.SOME_FAILED;
         }
-        return Tether.OK;
+        return reported;
     }
 
-    private static void writeSummary(Path file, String model, int documents, int written, long decisions, long characters,
+    private static void writeSummary(Path file, String model, String modelId, int documents, int written, long decisions, long characters,
                                      double seconds, Map<String, String> failed) throws IOException {
         try (OutputStream o = Files.newOutputStream(file);
              JsonGenerator g = new JsonFactory().createGenerator(o).useDefaultPrettyPrinter()) {
             g.writeStartObject();
             g.writeStringField("model", model);
+            g.writeStringField("modelId", modelId);
+            g.writeNumberField("ledgerFormat", LedgerWriter.FORMAT);
             g.writeNumberField("documents", documents);
             g.writeNumberField("written", written);
             g.writeNumberField("decisions", decisions);

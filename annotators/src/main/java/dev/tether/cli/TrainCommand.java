@@ -30,16 +30,17 @@ final class TrainCommand implements Command {
 
     @Override
     public String usage() {
-        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed] --out MODEL";
+        return "train [--quadruples FILE...] [--conllu FILE...] [--corrections SHEET... [--correction-weight W]] [--base MODEL|default] [--skip-malformed] --out MODEL";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out"), Set.of("skip-malformed"));
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out"), Set.of("skip-malformed"));
         Path target = Path.of(a.required("out"));
-        if (!a.has("quadruples") && !a.has("conllu")) {
-            throw new UsageException("give at least one training source with --quadruples or --conllu");
+        if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections")) {
+            throw new UsageException("give at least one training source with --quadruples, --conllu or --corrections");
         }
+        double correctionWeight = CorrectionEvents.weight(a.value("correction-weight", null), a.has("corrections"));
         boolean skip = a.has("skip-malformed");
         QuadrupleReader reader = new QuadrupleReader(skip);
         List<QuadrupleSet> sets = new ArrayList<>();
@@ -70,14 +71,16 @@ final class TrainCommand implements Command {
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
+        int problems = 0;
+        for (String f : a.values("corrections")) problems += CorrectionEvents.add(trainer, Path.of(f), correctionWeight, out, err);
         TetherModel model = trainer.build();
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
-        return Tether.OK;
+        return problems > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
-    private static String fileSha256(Path file) throws IOException {
+    static String fileSha256(Path file) throws IOException {
         MessageDigest digest = Sha256.newDigest();
         try (InputStream in = Files.newInputStream(file)) {
             byte[] buffer = new byte[1 << 16];

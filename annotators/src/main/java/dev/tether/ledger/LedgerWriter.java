@@ -19,25 +19,30 @@ import java.io.Writer;
  *  "probability":…, "margin":…, "alternatives":[{"head":{…}, "class":…, "probability":…}, …],
  *  "evidence":{"level":…, "counts":"hits/trials", "text":…, "model":…}}
  * </pre>
- * Offsets are character offsets into the document text. Alternatives are ranked, the chosen head first.
+ * Offsets count Unicode code points of the document text (UIMA's own offsets count UTF-16 units; they differ only
+ * after a character outside the Basic Multilingual Plane). Alternatives are ranked, the chosen head first. The
+ * layout is format {@link #FORMAT}, which {@code run-summary.json} states as {@code ledgerFormat}.
  */
 public final class LedgerWriter {
+    /** Version of the ledger's layout; raise it whenever a field changes meaning or goes away. */
+    public static final int FORMAT = 1;
     private static final JsonFactory JSON = new JsonFactory();
 
     /** Writes every decision of {@code jcas}; returns how many. */
     public int write(JCas jcas, String doc, Writer out) throws IOException {
         int n = 0;
+        CodePointOffsets offsets = CodePointOffsets.of(jcas.getDocumentText() == null ? "" : jcas.getDocumentText());
         for (AttachmentDecision d : JCasUtil.select(jcas, AttachmentDecision.class)) {
             try (JsonGenerator g = JSON.createGenerator(out)) {
                 g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
                 g.writeStartObject();
                 g.writeStringField("doc", doc);
                 g.writeStringField("kind", "attachment");
-                span(g, "preposition", d.getPreposition());
-                span(g, "object", d.getObject());
+                span(g, "preposition", d.getPreposition(), offsets);
+                span(g, "object", d.getObject(), offsets);
                 g.writeFieldName("head");
                 g.writeStartObject();
-                spanFields(g, d.getHead());
+                spanFields(g, d.getHead(), offsets);
                 g.writeStringField("class", d.getSiteClass());
                 g.writeEndObject();
                 g.writeNumberField("probability", round(d.getProbability()));
@@ -47,7 +52,7 @@ public final class LedgerWriter {
                 for (int i = 0; ranking != null && i < ranking.size(); i++) {
                     ScoredHead s = (ScoredHead) ranking.get(i);
                     g.writeStartObject();
-                    span(g, "head", s.getHead());
+                    span(g, "head", s.getHead(), offsets);
                     g.writeStringField("class", s.getSiteClass());
                     g.writeNumberField("probability", round(s.getProbability()));
                     g.writeEndObject();
@@ -71,17 +76,17 @@ public final class LedgerWriter {
         return Math.round(x * 1e4) / 1e4;
     }
 
-    private static void span(JsonGenerator g, String name, Annotation a) throws IOException {
+    private static void span(JsonGenerator g, String name, Annotation a, CodePointOffsets offsets) throws IOException {
         g.writeFieldName(name);
         g.writeStartObject();
-        spanFields(g, a);
+        spanFields(g, a, offsets);
         g.writeEndObject();
     }
 
-    private static void spanFields(JsonGenerator g, Annotation a) throws IOException {
+    private static void spanFields(JsonGenerator g, Annotation a, CodePointOffsets offsets) throws IOException {
         if (a == null) return;
-        g.writeNumberField("begin", a.getBegin());
-        g.writeNumberField("end", a.getEnd());
+        g.writeNumberField("begin", offsets.codePoint(a.getBegin()));
+        g.writeNumberField("end", offsets.codePoint(a.getEnd()));
         g.writeStringField("text", a.getCoveredText());
     }
 }
