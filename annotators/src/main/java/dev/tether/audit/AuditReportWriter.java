@@ -129,7 +129,8 @@ public final class AuditReportWriter {
         SvgCharts.bars(out, "Attachment decisions per class of the chosen head", RunSummary.labels(classes), RunSummary.values(classes));
         List<Map.Entry<String, Long>> levels = new ArrayList<>(s.byLevel.entrySet());
         SvgCharts.bars(out, "Share decided at each evidence level, most specific first", RunSummary.labels(levels), RunSummary.values(levels));
-        SvgCharts.histogram(out, "Probability of the chosen head, all decisions, in bins of 0.1", s.probabilities);
+        SvgCharts.histogram(out, "Probability of the chosen head, all decisions, in bins of 0.1", "probability of the chosen head",
+                s.probabilities);
         if (s.byKind.size() > 1) {
             List<Map.Entry<String, Long>> kinds = new ArrayList<>(s.byKind.entrySet());
             SvgCharts.bars(out, "Decisions per kind", RunSummary.labels(kinds), RunSummary.values(kinds));

@@ -31,7 +31,7 @@ public final class CalibrationPage {
                 + "mean stated probability; on the dashed diagonal the two agree", c);
         long[] counts = new long[c.bins()];
         for (int b = 0; b < counts.length; b++) counts[b] = c.count(b);
-        SvgCharts.histogram(out, "Decisions per bin of stated probability", counts);
+        SvgCharts.histogram(out, "Decisions per bin of stated probability", "stated probability", counts);
         out.append("</div>\n<table class=\"bins\"><thead><tr><th>stated probability</th><th>decisions</th><th>right</th>")
                 .append("<th>accuracy</th><th>mean stated</th><th>gap</th></tr></thead><tbody>\n");
         for (int b = 0; b < c.bins(); b++) {

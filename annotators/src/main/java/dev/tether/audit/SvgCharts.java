@@ -45,7 +45,7 @@ final class SvgCharts {
     }
 
     /** Counts of probabilities in {@code counts.length} equal-width bins over [0, 1]. */
-    static void histogram(StringBuilder out, String caption, long[] counts) {
+    static void histogram(StringBuilder out, String caption, String xLabel, long[] counts) {
         long max = 1;
         for (long c : counts) max = Math.max(max, c);
         double left = 40;
@@ -55,7 +55,7 @@ final class SvgCharts {
         double binW = plotW / counts.length;
         out.append("<figure><svg class=\"chart histogram\" width=\"").append(Html.px(left + plotW + 20)).append("\" height=\"")
                 .append(Html.px(top + plotH + 40)).append("\" role=\"img\" aria-label=\"").append(Html.escape(caption)).append("\">");
-        axes(out, left, top, plotW, plotH, "probability of the chosen head", "decisions", max);
+        axes(out, left, top, plotW, plotH, xLabel, "decisions", max);
         for (int b = 0; b < counts.length; b++) {
             double h = plotH * counts[b] / max;
             double x = left + b * binW;
