@@ -106,24 +106,24 @@ final class DocumentPage {
     private static void arcs(LedgerEntry e, int number, ReviewMark review, List<SentenceDrawing.Arc> arcs) {
         String label = number + mark(review);
         if (e instanceof AttachmentEntry a) {
-                Span p = a.preposition();
-                arcs.add(new SentenceDrawing.Arc(p.begin(), p.end(), a.head().begin(), a.head().end(), SentenceDrawing.Style.CHOSEN,
-                        number, label, lowConfidence(a), "#" + number + " '" + p.text() + " " + a.object().text() + "' attaches to '"
-                        + a.head().text() + "' (" + a.headClass() + ", p " + Html.fixed(a.probability(), 2) + ")"));
-                AttachmentEntry.Alternative r = a.runnerUp();
-                if (r != null) {
-                    arcs.add(new SentenceDrawing.Arc(p.begin(), p.end(), r.head().begin(), r.head().end(),
-                            SentenceDrawing.Style.RUNNER_UP, number, null, false, "#" + number + " runner-up '" + r.head().text()
-                            + "' (" + r.headClass() + ", p " + Html.fixed(r.probability(), 2) + ")"));
-                }
+            Span p = a.preposition();
+            arcs.add(new SentenceDrawing.Arc(p.begin(), p.end(), a.head().begin(), a.head().end(), SentenceDrawing.Style.CHOSEN,
+                    number, label, lowConfidence(a), "#" + number + " '" + p.text() + " " + a.object().text() + "' attaches to '"
+                    + a.head().text() + "' (" + a.headClass() + ", p " + Html.fixed(a.probability(), 2) + ")"));
+            AttachmentEntry.Alternative r = a.runnerUp();
+            if (r != null) {
+                arcs.add(new SentenceDrawing.Arc(p.begin(), p.end(), r.head().begin(), r.head().end(),
+                        SentenceDrawing.Style.RUNNER_UP, number, null, false, "#" + number + " runner-up '" + r.head().text()
+                        + "' (" + r.headClass() + ", p " + Html.fixed(r.probability(), 2) + ")"));
+            }
         } else if (e instanceof CoordinationEntry c) {
-                Span k = c.coordinator();
-                for (int j = 0; j < c.conjuncts().size(); j++) {
-                    Span h = c.conjuncts().get(j).head();
-                    arcs.add(new SentenceDrawing.Arc(k.begin(), k.end(), h.begin(), h.end(), SentenceDrawing.Style.CONJUNCT,
-                            number, j == 0 ? label : null, lowConfidence(c), "#" + number + " conjunct " + (j + 1) + " of '" + k.text()
-                            + "': '" + c.conjuncts().get(j).extent().text() + "' (p " + Html.fixed(c.probability(), 2) + ")"));
-                }
+            Span k = c.coordinator();
+            for (int j = 0; j < c.conjuncts().size(); j++) {
+                Span h = c.conjuncts().get(j).head();
+                arcs.add(new SentenceDrawing.Arc(k.begin(), k.end(), h.begin(), h.end(), SentenceDrawing.Style.CONJUNCT,
+                        number, j == 0 ? label : null, lowConfidence(c), "#" + number + " conjunct " + (j + 1) + " of '" + k.text()
+                        + "': '" + c.conjuncts().get(j).extent().text() + "' (p " + Html.fixed(c.probability(), 2) + ")"));
+            }
         }
     }
 
@@ -156,28 +156,28 @@ final class DocumentPage {
             if (sentenceOf[i] >= 0) out.append("<a href=\"#s").append(sentenceOf[i] + 1).append("\">s").append(sentenceOf[i] + 1).append("</a>");
             out.append("</td><td>").append(e.kind()).append("</td>");
             if (e instanceof AttachmentEntry a) {
-                    out.append("<td>").append(Html.escape(a.preposition().text() + " \u2026 " + a.object().text())).append("</td><td>")
-                            .append(Html.escape(a.head().text())).append(" <small>(").append(Html.escape(a.headClass()))
-                            .append(")</small></td>");
-                    cells(out, e);
-                    AttachmentEntry.Alternative r = a.runnerUp();
-                    out.append("<td>");
-                    if (r != null) {
-                        out.append(Html.escape(r.head().text())).append(" <small>(").append(Html.escape(r.headClass()))
-                                .append(", ").append(Html.fixed(r.probability(), 3)).append(")</small>");
-                    }
-                    out.append("</td><td><b>").append(Html.escape(EvidenceLevels.describe(a.evidenceLevel()))).append(".</b> ")
-                            .append(Html.escape(a.evidenceText())).append("</td>");
+                out.append("<td>").append(Html.escape(a.preposition().text() + " \u2026 " + a.object().text())).append("</td><td>")
+                        .append(Html.escape(a.head().text())).append(" <small>(").append(Html.escape(a.headClass()))
+                        .append(")</small></td>");
+                cells(out, e);
+                AttachmentEntry.Alternative r = a.runnerUp();
+                out.append("<td>");
+                if (r != null) {
+                    out.append(Html.escape(r.head().text())).append(" <small>(").append(Html.escape(r.headClass()))
+                            .append(", ").append(Html.fixed(r.probability(), 3)).append(")</small>");
+                }
+                out.append("</td><td><b>").append(Html.escape(EvidenceLevels.describe(a.evidenceLevel()))).append(".</b> ")
+                        .append(Html.escape(a.evidenceText())).append("</td>");
             } else if (e instanceof CoordinationEntry c) {
-                    StringBuilder conjuncts = new StringBuilder();
-                    for (CoordinationEntry.Conjunct k : c.conjuncts()) {
-                        if (conjuncts.length() > 0) conjuncts.append(" | ");
-                        conjuncts.append(k.extent().text());
-                    }
-                    out.append("<td>").append(Html.escape(c.coordinator().text())).append("</td><td>")
-                            .append(Html.escape(conjuncts.toString())).append("</td>");
-                    cells(out, e);
-                    out.append("<td></td><td>").append(Html.escape(c.evidenceText())).append("</td>");
+                StringBuilder conjuncts = new StringBuilder();
+                for (CoordinationEntry.Conjunct k : c.conjuncts()) {
+                    if (conjuncts.length() > 0) conjuncts.append(" | ");
+                    conjuncts.append(k.extent().text());
+                }
+                out.append("<td>").append(Html.escape(c.coordinator().text())).append("</td><td>")
+                        .append(Html.escape(conjuncts.toString())).append("</td>");
+                cells(out, e);
+                out.append("<td></td><td>").append(Html.escape(c.evidenceText())).append("</td>");
             }
             ReviewMark r = reviewed.get(e.anchor());
             out.append("<td>");

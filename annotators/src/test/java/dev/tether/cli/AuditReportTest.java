@@ -119,9 +119,7 @@ class AuditReportTest {
     void aLedgerLineThatIsNotJsonNamesFileAndLine() throws IOException {
         Path copy = copyRun("not-json");
         Path ledger = copy.resolve(AuditRuns.DEMO[0] + ".ledger.jsonl");
-        List<String> lines = new ArrayList<>(Files.readAllLines(ledger));
-        lines.set(1, lines.get(1).substring(0, 40));
-        Files.write(ledger, lines);
+        editLine(ledger, 1, line -> line.substring(0, 40));
         CommandLineRun r = CommandLineRun.of("audit", "--ledger", copy.toString(), "--out", dir.resolve("out-not-json").toString());
         assertEquals(3, r.exitCode(), r.toString());
         assertTrue(r.err().contains(ledger + ":2: not JSON"), r.err());
@@ -145,9 +143,7 @@ class AuditReportTest {
 
         Path mixed = copyRun("mixed-models");
         Path ledger = mixed.resolve(AuditRuns.DEMO[1] + ".ledger.jsonl");
-        List<String> lines = new ArrayList<>(Files.readAllLines(ledger));
-        lines.set(2, lines.get(2).replaceAll("\"model\":\"[0-9a-f]+\"", "\"model\":\"0123456789ab\""));
-        Files.write(ledger, lines);
+        editLine(ledger, 2, line -> line.replaceAll("\"model\":\"[0-9a-f]+\"", "\"model\":\"0123456789ab\""));
         r = CommandLineRun.of("audit", "--ledger", mixed.toString(), "--out", dir.resolve("out-mixed").toString());
         assertEquals(3, r.exitCode(), r.toString());
         assertTrue(r.err().contains(ledger + ":3: decided by model 0123456789ab"), r.err());
@@ -157,9 +153,7 @@ class AuditReportTest {
     void aKindThisTetherDoesNotKnowIsRefusedWithItsLine() throws IOException {
         Path copy = copyRun("unknown-kind");
         Path ledger = copy.resolve(AuditRuns.DEMO[0] + ".ledger.jsonl");
-        List<String> lines = new ArrayList<>(Files.readAllLines(ledger));
-        lines.set(0, lines.get(0).replace("\"kind\":\"attachment\"", "\"kind\":\"ellipsis\""));
-        Files.write(ledger, lines);
+        editLine(ledger, 0, line -> line.replace("\"kind\":\"attachment\"", "\"kind\":\"ellipsis\""));
         CommandLineRun r = CommandLineRun.of("audit", "--ledger", copy.toString(), "--out", dir.resolve("out-kind").toString());
         assertEquals(3, r.exitCode(), r.toString());
         assertTrue(r.err().contains(ledger + ":1: kind 'ellipsis' is not one this Tether reads"), r.err());
@@ -200,6 +194,13 @@ class AuditReportTest {
         assertEquals(2, count(page, "<path class=\"arc conjunct\""), "one dotted arc per conjunct");
         assertTrue(page.contains("<td>coordination</td><td>and</td><td>filters | gaskets</td>"), "a row of its own");
         assertTrue(Files.readString(out.resolve("index.html")).contains("Decisions per kind"));
+    }
+
+    /** Replaces line {@code index} (0-based) of {@code ledger} by what {@code edit} makes of it. */
+    private static void editLine(Path ledger, int index, java.util.function.UnaryOperator<String> edit) throws IOException {
+        List<String> lines = new ArrayList<>(Files.readAllLines(ledger));
+        lines.set(index, edit.apply(lines.get(index)));
+        Files.write(ledger, lines);
     }
 
     private static Path copyRun(String name) throws IOException {
