@@ -96,8 +96,8 @@ public final class AuditReportWriter {
             out.append("<p>Review sheet of the least certain decisions: <a href=\"").append(Html.escape(reviewSheet)).append("\">")
                     .append(Html.escape(reviewSheet)).append("</a></p>\n");
         }
-        out.append("<h2>Documents</h2>\n<table class=\"documents\"><thead><tr><th>document</th><th>decisions</th>")
-                .append("<th>low-confidence</th><th>reviewed</th><th>mean probability</th></tr></thead>\n<tbody>\n");
+        out.append("<h2>Documents</h2>\n<table class=\"documents\"><thead><tr><th>document</th><th class=\"num\">decisions</th>")
+                .append("<th class=\"num\">low-confidence</th><th class=\"num\">reviewed</th><th class=\"num\">mean probability</th></tr></thead>\n<tbody>\n");
         for (int i = 0; i < run.documents().size(); i++) {
             AuditedRun.LedgerDocument d = run.documents().get(i);
             long low = d.entries().stream().filter(DocumentPage::lowConfidence).count();

@@ -147,7 +147,7 @@ final class DocumentPage {
 
     private static void table(StringBuilder out, List<LedgerEntry> entries, int[] sentenceOf, Map<Integer, ReviewMark> reviewed) {
         out.append("<h2>Decisions</h2>\n<table class=\"decisions\">\n<thead><tr><th>#</th><th>sentence</th><th>kind</th>")
-                .append("<th>phrase</th><th>chosen</th><th>probability</th><th>margin</th><th>runner-up</th>")
+                .append("<th>phrase</th><th>chosen</th><th class=\"num\">probability</th><th class=\"num\">margin</th><th>runner-up</th>")
                 .append("<th>evidence</th><th>review</th></tr></thead>\n<tbody>\n");
         for (int i = 0; i < entries.size(); i++) {
             LedgerEntry e = entries.get(i);

@@ -18,6 +18,7 @@ final class ReportStyle {
             table { border-collapse: collapse; width: 100%; font-size: .88rem; margin: .6rem 0; }
             th, td { border-bottom: 1px solid #bbb; padding: .25rem .4rem; text-align: left; vertical-align: top; }
             th { border-bottom: 2px solid #1b1b1b; font-weight: bold; }
+            th.num { text-align: right; }
             td.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
             tr.low td:first-child { font-weight: bold; }
             tr.low td:first-child::before { content: "! "; }

@@ -58,7 +58,7 @@ class AuditReportTest {
             assertEquals(decisions, count(page, "<tr id=\"d\\d+\""), doc + ": one table row per decision");
             assertTrue(count(page, "<path class=\"arc runner-up\"") > 0, doc + ": runners-up drawn");
             assertTrue(page.contains("aria-label=\"legend\""), "a legend");
-            assertTrue(page.contains("<th>probability</th><th>margin</th>"), "probability and margin columns");
+            assertTrue(page.contains("<th class=\"num\">probability</th><th class=\"num\">margin</th>"), "probability and margin columns");
             assertTrue(index.contains("documents/" + page(report, doc).getFileName()), "index links " + doc);
         }
         assertTrue(index.contains("Attachment decisions per preposition"));
