@@ -172,6 +172,20 @@ class AuditReportTest {
     }
 
     @Test
+    void documentsTheAnnotationCouldNotReadAreListedOnTheIndex() throws IOException {
+        Path copy = copyRun("annotate-failed");
+        Path summary = copy.resolve("run-summary.json");
+        Files.writeString(summary, Files.readString(summary).replace("\"failed\" : [ ]",
+                "\"failed\" : [ { \"doc\" : \"log-33-<bilge>.txt\", \"reason\" : \"not UTF-8 text\" } ]"));
+        Path out = dir.resolve("out-annotate-failed");
+        CommandLineRun r = CommandLineRun.of("audit", "--ledger", copy.toString(), "--out", out.toString());
+        assertEquals(0, r.exitCode(), "the report itself is complete: " + r);
+        String index = Files.readString(out.resolve("index.html"));
+        assertTrue(index.contains("<tr><td>log-33-&lt;bilge&gt;.txt</td><td>annotate</td><td>not UTF-8 text</td></tr>"), index);
+        assertTrue(index.contains("<b>1</b>failures"));
+    }
+
+    @Test
     void aCoordinationDecisionIsDrawnBesideTheAttachments() throws IOException {
         Path copy = copyRun("coordination");
         String doc = AuditRuns.DEMO[0];
