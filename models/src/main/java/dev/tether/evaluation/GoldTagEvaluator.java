@@ -20,10 +20,10 @@ public final class GoldTagEvaluator {
             AttachmentQuery q = e.query();
             int gold = e.gold();
             result.candidateRecall.add(gold >= 0);
-            HeadChoice chosen = scorer.choose(q);
-            boolean right = gold >= 0 && chosen.best() == gold;
+            HeadChoice chosen = q.size() > 0 ? scorer.choose(q) : null;
+            boolean right = chosen != null && gold >= 0 && chosen.best() == gold;
             result.attachment.add(right);
-            if (chosen.best() >= 0) result.calibration.add(Math.min(1, chosen.probability(chosen.best())), right);
+            if (chosen != null && chosen.best() >= 0) result.calibration.add(Math.min(1, chosen.probability(chosen.best())), right);
             int nearest = -1;
             int verb = -1;
             int noun = -1;
