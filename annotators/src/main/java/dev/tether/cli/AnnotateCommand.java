@@ -38,6 +38,8 @@ import java.util.Set;
  */
 final class AnnotateCommand implements Command {
     static final String SUMMARY = "run-summary.json";
+    /** Folder of the HTML report inside the output folder, with {@code --report}. */
+    static final String REPORT = "report";
 
     @Override
     public String name() {
@@ -46,7 +48,7 @@ final class AnnotateCommand implements Command {
 
     @Override
     public String usage() {
-        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N] [--chunks] [--fresh]";
+        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N] [--chunks] [--fresh] [--report]";
     }
 
     @Override
@@ -63,7 +65,8 @@ final class AnnotateCommand implements Command {
                 + "  --threads N        pipelines run side by side, sharing one loaded model (default: the\n"
                 + "                     number of cores, " + Runtime.getRuntime().availableProcessors() + " here); the output does not depend on N\n"
                 + "  --chunks           also write base chunks into the XMI (slower; Tether does not need them)\n"
-                + "  --fresh            start over: forget what an earlier run into --out completed\n\n"
+                + "  --fresh            start over: forget what an earlier run into --out completed\n"
+                + "  --report           also write the HTML audit report into --out/" + REPORT + "/ (see 'tether audit')\n\n"
                 + "Re-running the same command into the same folder finishes an interrupted run: documents whose\n"
                 + "input, model and options are unchanged are reused, the rest are done again, and the folder ends\n"
                 + "with exactly the output of a clean run.\n"
@@ -74,7 +77,7 @@ final class AnnotateCommand implements Command {
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model", "threads"),
-                Set.of("chunks", "fresh"));
+                Set.of("chunks", "fresh", "report"));
         Path in = Path.of(a.required("in"));
         Path outDir = Path.of(a.required("out"));
         String model = a.value("model", ModelLocator.DEFAULT);
@@ -125,12 +128,13 @@ final class AnnotateCommand implements Command {
                     result.staleRemoved());
         }
         out.printf("output: %s  (per document: .xmi and .ledger.jsonl; %s; summary: %s)%n", outDir, RunManifest.FILE, SUMMARY);
+        int reported = a.has("report") ? AuditCommand.report(outDir, outDir.resolve(REPORT), -1, null, out, err) : Tether.OK;
         if (!result.failed().isEmpty()) {
             out.printf("%,d documents failed:%n", result.failed().size());
             for (CollectionRun.Failure f : result.failed()) out.println("  " + f.doc() + ": " + f.reason());
             return Tether.SOME_FAILED;
         }
-        return Tether.OK;
+        return reported;
     }
 
     /** "3 with other endings, 1 hidden, 2 symbolic links (not followed)": what the listing left out. */
@@ -154,6 +158,7 @@ final class AnnotateCommand implements Command {
                 g.writeStartObject();
                 g.writeStringField("model", settings.model());
                 g.writeStringField("modelId", settings.modelId());
+                g.writeNumberField("ledgerFormat", LedgerWriter.FORMAT);
                 g.writeNumberField("documents", r.documents());
                 g.writeNumberField("written", r.complete());
                 g.writeNumberField("annotated", r.annotated());

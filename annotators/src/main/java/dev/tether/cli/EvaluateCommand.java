@@ -29,7 +29,7 @@ final class EvaluateCommand implements Command {
 
     @Override
     public String usage() {
-        return "evaluate --model MODEL|default (--quadruples FILE [--skip-malformed] | --conllu FILE [--gold-tags]) [--json]";
+        return "evaluate --model MODEL|default (--quadruples FILE [--skip-malformed] | --conllu FILE [--gold-tags] [--report FOLDER]) [--json]";
     }
 
     @Override
@@ -47,7 +47,7 @@ final class EvaluateCommand implements Command {
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu"), Set.of("json", "skip-malformed", "gold-tags"));
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("model", "quadruples", "conllu", "report"), Set.of("json", "skip-malformed", "gold-tags"));
         String modelLocation = a.value("model", ModelLocator.DEFAULT);
         TetherModel model = ModelLocator.load(modelLocation);
         if (a.has("quadruples") == a.has("conllu")) {
@@ -55,9 +55,11 @@ final class EvaluateCommand implements Command {
         }
         if (a.has("conllu")) {
             Path conllu = Path.of(a.required("conllu"));
-            if (a.has("gold-tags")) return new GoldTagReport(model).run(conllu, a.has("json"), out);
-            return new RunningTextReport(modelLocation, model).run(conllu, a.has("json"), out);
+            Path report = a.has("report") ? Path.of(a.required("report")) : null;
+            if (a.has("gold-tags")) return new GoldTagReport(model).run(conllu, a.has("json"), report, out);
+            return new RunningTextReport(modelLocation, model).run(conllu, a.has("json"), report, out);
         }
+        if (a.has("report")) throw new UsageException("--report draws calibration on running text; use it with --conllu");
         QuadrupleSet set = new QuadrupleReader(a.has("skip-malformed")).read(Path.of(a.required("quadruples")));
         QuadrupleEvaluation e = new QuadrupleEvaluator().evaluate(model, set.quadruples());
         if (a.has("json")) {

@@ -2,6 +2,7 @@ package dev.tether.cli;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import dev.tether.audit.CalibrationPage;
 import dev.tether.candidates.HeadCandidateProposer;
 import dev.tether.evaluation.Accuracy;
 import dev.tether.evaluation.GoldTagEvaluation;
@@ -24,7 +25,7 @@ final class GoldTagReport {
         this.model = model;
     }
 
-    int run(Path conllu, boolean json, PrintStream out) throws IOException {
+    int run(Path conllu, boolean json, Path report, PrintStream out) throws IOException {
         if (Files.isDirectory(conllu)) throw new IOException(conllu + " is a directory; give a CoNLL-U file");
         TreebankExamples examples = new TreebankExampleExtractor(new HeadCandidateProposer()).extract(conllu);
         GoldTagEvaluation e = new GoldTagEvaluator().evaluate(model, examples);
@@ -40,6 +41,7 @@ final class GoldTagReport {
                 g.writeObjectFieldStart("attachment");
                 AccuracyJson.fields(g, a);
                 g.writeNumberField("candidateRecall", e.candidateRecall().value());
+                g.writeNumberField("calibration_error", e.calibration().ece());
                 g.writeEndObject();
                 g.writeObjectFieldStart("baselines");
                 for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
@@ -56,6 +58,12 @@ final class GoldTagReport {
                 out.printf("%-28s %7.2f%%  (%,d of %,d)%n", c.getKey(), 100 * c.getValue().value(), c.getValue().correct(), c.getValue().total());
             }
             out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
+            out.printf("%-28s %8.4f  (%d equal-width bins)%n", "expected calibration error", e.calibration().ece(), e.calibration().bins());
+        }
+        if (report != null) {
+            Path page = CalibrationPage.write(report, model.id(), conllu.getFileName().toString(),
+                    "gold tokens and tags", a.value(), e.calibration());
+            (json ? System.err : out).println("calibration report: " + page);
         }
         return Tether.OK;
     }

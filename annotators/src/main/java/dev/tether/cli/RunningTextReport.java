@@ -2,6 +2,7 @@ package dev.tether.cli;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import dev.tether.audit.CalibrationPage;
 import dev.tether.evaluation.Accuracy;
 import dev.tether.evaluation.RunningTextEvaluation;
 import dev.tether.evaluation.RunningTextEvaluator;
@@ -27,7 +28,7 @@ final class RunningTextReport {
         this.model = model;
     }
 
-    int run(Path conllu, boolean json, PrintStream out) throws IOException {
+    int run(Path conllu, boolean json, Path report, PrintStream out) throws IOException {
         if (Files.isDirectory(conllu)) throw new IOException(conllu + " is a directory; give a CoNLL-U file");
         RunningTextEvaluation e;
         try {
@@ -41,6 +42,11 @@ final class RunningTextReport {
             writeJson(out, conllu, e);
         } else {
             writeText(out, conllu, e);
+        }
+        if (report != null) {
+            Path page = CalibrationPage.write(report, model.id(), conllu.getFileName().toString(),
+                    "raw text through the whole pipeline", e.attachment().value(), e.calibration());
+            (json ? System.err : out).println("calibration report: " + page);
         }
         return Tether.OK;
     }
@@ -58,6 +64,8 @@ final class RunningTextReport {
         }
         out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
         out.printf("%-28s %8d%n", "prepositions not decided", e.missedPrepositions());
+        out.printf("%-28s %8.4f  (%d equal-width bins, %,d decisions)%n", "expected calibration error", e.calibration().ece(),
+                e.calibration().bins(), e.calibration().total());
         out.println();
         out.printf("by gold head class%n%-12s %6s %9s%n", "class", "n", "accuracy");
         for (Map.Entry<String, Accuracy> c : e.byHeadClass().entrySet()) {
@@ -80,6 +88,7 @@ final class RunningTextReport {
             g.writeObjectFieldStart("attachment");
             AccuracyJson.fields(g, a);
             g.writeNumberField("candidateRecall", e.candidateRecall().value());
+            g.writeNumberField("calibration_error", e.calibration().ece());
             g.writeNumberField("missedPrepositions", e.missedPrepositions());
             g.writeNumberField("decisions", e.decisions());
             g.writeObjectFieldStart("byHeadClass");

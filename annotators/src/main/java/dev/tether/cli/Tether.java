@@ -30,6 +30,7 @@ public final class Tether {
 
     /** Every verb of the command line; a new command is one more line here. */
     private static final List<Supplier<Command>> VERBS = List.of(
+            AuditCommand::new,
             AnnotateCommand::new,
             EvaluateCommand::new,
             InspectCommand::new,

@@ -38,8 +38,8 @@ final class TrainCommand implements Command {
 
     @Override
     public String usage() {
-        return "train [--quadruples FILE...] [--conllu FILE...] [--base MODEL|default] [--skip-malformed]"
-                + " [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
+        return "train [--quadruples FILE...] [--conllu FILE...] [--corrections SHEET... [--correction-weight W]]"
+                + " [--base MODEL|default] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
@@ -48,20 +48,30 @@ final class TrainCommand implements Command {
                 + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n\n"
                 + "  --quadruples FILE...  labelled quadruples: 'id verb noun1 preposition noun2 V|N' per line, or\n"
                 + "                        Tether's tab-separated format with a header\n"
-                + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz)\n"
-                + "  --base MODEL|default  start from the counts of an existing model\n"
+                + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz): head-choice examples that train the\n"
+                + "                        attachment ranker, and Penn tags (column 5) that train a tagger\n"
+                + "  --corrections SHEET.. review sheets from 'tether audit --queue', marked by a reviewer\n"
+                + "  --correction-weight W how much one reviewed decision counts (default 1)\n"
+                + "  --base MODEL|default  start from the counts (and ranker, tagger) of an existing model\n"
                 + "  --skip-malformed      skip and count lines that do not parse (default: stop at the first)\n"
+                + "  --ranker-without F..  leave these feature families out of the ranker (for ablation): "
+                + java.util.Arrays.stream(AttachmentFeatureFamily.values()).map(AttachmentFeatureFamily::label)
+                        .collect(java.util.stream.Collectors.joining(", ")) + "\n"
+                + "  --no-ranker           train no ranker: the count-based score chooses heads\n"
+                + "  --no-tagger           train no tagger: the shipped OpenNLP tagger stays in use\n"
                 + "  --out MODEL           the model file to write (atomically)\n";
     }
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("quadruples", "conllu", "base", "out", "ranker-without"),
+        CommandArguments a = new CommandArguments(name(), args, 1,
+                Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without"),
                 Set.of("skip-malformed", "no-ranker", "no-tagger"));
         Path target = Path.of(a.required("out"));
-        if (!a.has("quadruples") && !a.has("conllu")) {
-            throw new UsageException("give at least one training source with --quadruples or --conllu");
+        if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections")) {
+            throw new UsageException("give at least one training source with --quadruples, --conllu or --corrections");
         }
+        double correctionWeight = CorrectionEvents.weight(a.value("correction-weight", null), a.has("corrections"));
         boolean skip = a.has("skip-malformed");
         QuadrupleReader reader = new QuadrupleReader(skip);
         List<QuadrupleSet> sets = new ArrayList<>();
@@ -111,6 +121,8 @@ final class TrainCommand implements Command {
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
+        int problems = 0;
+        for (String f : a.values("corrections")) problems += CorrectionEvents.add(trainer, Path.of(f), correctionWeight, out, err);
         if (a.has("no-tagger")) trainer.withTagger(null);
         else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
         long start = System.nanoTime();
@@ -120,7 +132,7 @@ final class TrainCommand implements Command {
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
-        return Tether.OK;
+        return problems > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
     /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */
@@ -137,7 +149,7 @@ final class TrainCommand implements Command {
         out.printf("tagger: %s (%,d bytes)%n", section.description(), section.size());
     }
 
-    private static String fileSha256(Path file) throws IOException {
+    static String fileSha256(Path file) throws IOException {
         MessageDigest digest = Sha256.newDigest();
         try (InputStream in = Files.newInputStream(file)) {
             byte[] buffer = new byte[1 << 16];

@@ -20,6 +20,7 @@ public final class RunningTextEvaluation {
 
     final Accuracy attachment = new Accuracy();
     final Accuracy candidateRecall = new Accuracy();
+    final CalibrationError calibration = new CalibrationError();
     final Map<String, Accuracy> byHeadClass = new LinkedHashMap<>();
     final Map<String, Accuracy> baselines = new LinkedHashMap<>();
     long sentences;
@@ -38,6 +39,8 @@ public final class RunningTextEvaluation {
     public Accuracy attachment() { return attachment; }
     /** Gold head among the pipeline's candidates, over all gold attachments. */
     public Accuracy candidateRecall() { return candidateRecall; }
+    /** Stated probability against correctness of every decision that answers a gold attachment. */
+    public CalibrationError calibration() { return calibration; }
     /** Accuracy by the class of the gold head. */
     public Map<String, Accuracy> byHeadClass() { return byHeadClass; }
     public Map<String, Accuracy> baselines() { return baselines; }

@@ -93,6 +93,7 @@ public final class RunningTextEvaluator {
         }
         boolean right = decision != null && overlaps(decision.getHead(), hb, he);
         if (decision == null) result.missedPrepositions++;
+        else result.calibration.add(Math.min(1, Math.max(0, decision.getProbability())), right);
         result.attachment.add(right);
         result.byHeadClass.get(headClass).add(right);
         boolean covered = false;

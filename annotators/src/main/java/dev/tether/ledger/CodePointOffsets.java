@@ -1,39 +1,60 @@
 package dev.tether.ledger;
 
-import java.util.Arrays;
-
 /**
- * Converts UIMA's offsets (UTF-16 code units, Java's {@code String} index) into Unicode code points, the unit the
- * ledger uses: what Python strings, JSON tools and most readers index by. Built once per document; a lookup is a
- * binary search over the positions of the characters outside the Basic Multilingual Plane, and the identity when
- * there are none.
+ * Converts between UIMA's UTF-16 offsets and the ledger's Unicode code-point offsets for one text. A text without
+ * surrogate pairs (most text) needs no table: both offsets are the same.
  */
-final class CodePointOffsets {
-    /** UTF-16 index of the low half of every surrogate pair, ascending. */
-    private final int[] lowHalves;
+public final class CodePointOffsets {
+    private final String text;
+    /** Code-point offset of each UTF-16 offset, or null when the two agree. */
+    private final int[] toCodePoint;
+    /** UTF-16 offset of each code-point offset, or null when the two agree. */
+    private final int[] toUtf16;
 
-    private CodePointOffsets(int[] lowHalves) {
-        this.lowHalves = lowHalves;
-    }
-
-    static CodePointOffsets of(String text) {
-        if (text == null) return new CodePointOffsets(new int[0]);
-        int[] found = new int[16];
-        int n = 0;
-        for (int i = 1; i < text.length(); i++) {
-            if (Character.isLowSurrogate(text.charAt(i)) && Character.isHighSurrogate(text.charAt(i - 1))) {
-                if (n == found.length) found = Arrays.copyOf(found, n * 2);
-                found[n++] = i;
+    private CodePointOffsets(String text) {
+        this.text = text;
+        int length = text.length();
+        int codePoints = text.codePointCount(0, length);
+        if (codePoints == length) {
+            toCodePoint = null;
+            toUtf16 = null;
+            return;
+        }
+        toCodePoint = new int[length + 1];
+        toUtf16 = new int[codePoints + 1];
+        int cp = 0;
+        for (int i = 0; i < length; i++) {
+            toCodePoint[i] = cp;
+            if (!(Character.isLowSurrogate(text.charAt(i)) && i > 0 && Character.isHighSurrogate(text.charAt(i - 1)))) {
+                toUtf16[cp] = i;
+                cp++;
             }
         }
-        return new CodePointOffsets(Arrays.copyOf(found, n));
+        toCodePoint[length] = cp;
+        toUtf16[cp] = length;
     }
 
-    /** The code point index of the UTF-16 index {@code utf16}: minus one for every pair that ends before it. */
-    int codePoint(int utf16) {
-        if (lowHalves.length == 0) return utf16;
-        int pos = Arrays.binarySearch(lowHalves, utf16);
-        int pairsBefore = pos >= 0 ? pos : -pos - 1;
-        return utf16 - pairsBefore;
+    public static CodePointOffsets of(String text) {
+        return new CodePointOffsets(text);
+    }
+
+    public String text() { return text; }
+
+    /** Code points in the whole text. */
+    public int length() {
+        return toUtf16 == null ? text.length() : toUtf16.length - 1;
+    }
+
+    public int codePoint(int utf16Offset) {
+        return toCodePoint == null ? utf16Offset : toCodePoint[utf16Offset];
+    }
+
+    public int utf16(int codePointOffset) {
+        return toUtf16 == null ? codePointOffset : toUtf16[codePointOffset];
+    }
+
+    /** The text between two code-point offsets. */
+    public String substring(int begin, int end) {
+        return text.substring(utf16(begin), utf16(end));
     }
 }

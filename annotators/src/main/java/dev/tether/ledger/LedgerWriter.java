@@ -19,11 +19,13 @@ import java.io.Writer;
  *  "probability":…, "margin":…, "alternatives":[{"head":{…}, "class":…, "probability":…}, …],
  *  "evidence":{"level":…, "counts":"hits/trials", "text":…, "model":…}}
  * </pre>
- * Offsets {@code begin} and {@code end} count Unicode code points from the start of the document text (a character
- * outside the Basic Multilingual Plane counts once, as in Python or JSON tools; UIMA's own offsets, kept in the XMI,
- * count UTF-16 code units and count it twice). Alternatives are ranked, the chosen head first.
+ * Offsets count Unicode code points of the document text (UIMA's own offsets count UTF-16 units; they differ only
+ * after a character outside the Basic Multilingual Plane). Alternatives are ranked, the chosen head first. The
+ * layout is format {@link #FORMAT}, which {@code run-summary.json} states as {@code ledgerFormat}.
  */
 public final class LedgerWriter {
+    /** Version of the ledger's layout; raise it whenever a field changes meaning or goes away. */
+    public static final int FORMAT = 1;
     private static final JsonFactory JSON = new JsonFactory();
 
     /** The unit of the ledger's offsets, as named in run summaries. */
@@ -32,7 +34,7 @@ public final class LedgerWriter {
     /** Writes every decision of {@code jcas}; returns how many. */
     public int write(JCas jcas, String doc, Writer out) throws IOException {
         int n = 0;
-        CodePointOffsets offsets = CodePointOffsets.of(jcas.getDocumentText());
+        CodePointOffsets offsets = CodePointOffsets.of(jcas.getDocumentText() == null ? "" : jcas.getDocumentText());
         for (AttachmentDecision d : JCasUtil.select(jcas, AttachmentDecision.class)) {
             try (JsonGenerator g = JSON.createGenerator(out)) {
                 g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);

@@ -20,6 +20,7 @@ public final class GoldTagEvaluation {
 
     final Accuracy attachment = new Accuracy();
     final Accuracy candidateRecall = new Accuracy();
+    final CalibrationError calibration = new CalibrationError();
     final Map<String, Accuracy> comparisons = new LinkedHashMap<>();
 
     GoldTagEvaluation() {
@@ -31,6 +32,8 @@ public final class GoldTagEvaluation {
 
     public Accuracy attachment() { return attachment; }
     public Accuracy candidateRecall() { return candidateRecall; }
+    /** Stated probability against correctness of every decision made (a missed preposition states none). */
+    public CalibrationError calibration() { return calibration; }
     /** Baselines and the ceiling, by name. */
     public Map<String, Accuracy> comparisons() { return comparisons; }
 }

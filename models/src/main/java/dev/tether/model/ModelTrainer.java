@@ -11,6 +11,7 @@ import dev.tether.attachment.CandidateStructure;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.attachment.LabelledQuadruple;
 import dev.tether.attachment.Quadruple;
+import dev.tether.attachment.ReviewedChoice;
 import dev.tether.candidates.HeadClass;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
@@ -110,6 +111,26 @@ public final class ModelTrainer {
             heads.addLexical(p, HeadChoiceScorer.headKey(normalizer, q.head(i), c), c.ordinal(), o, hit, 1.0);
             heads.addStructure(structure[i], hit, 1.0);
         }
+    }
+
+    /**
+     * Counts decisions a person reviewed as lexical head-choice events: for each, every offered head is a trial of
+     * its word with the preposition and object (and of its class), the reviewer's choice the hit, each counted
+     * {@code weight} times. No structural counts: a reviewed line carries words, not positions. Recorded as a source
+     * of kind {@code corrections}.
+     */
+    public ModelTrainer addReviewedChoices(List<ReviewedChoice> choices, String name, String sha256) {
+        for (ReviewedChoice r : choices) {
+            String p = normalizer.preposition(r.preposition());
+            String o = normalizer.noun(r.object());
+            for (int i = 0; i < r.heads().size(); i++) {
+                HeadClass c = r.classes().get(i);
+                headChoice.addLexical(p, HeadChoiceScorer.headKey(normalizer, r.heads().get(i), c), c.ordinal(), o,
+                        i == r.chosen(), r.weight());
+            }
+        }
+        sources.add(new ModelSource(name, "corrections", choices.size(), 0, sha256));
+        return this;
     }
 
     /** Adds the counts of an existing model (for example the shipped default) to what is counted here. */
