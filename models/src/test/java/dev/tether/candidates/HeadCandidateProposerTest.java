@@ -75,6 +75,31 @@ class HeadCandidateProposerTest {
     }
 
     @Test
+    void verbMisreadAsAdjectiveOrPunctuationAfterItsSubjectIsStillAVerb() {
+        // Web-trained taggers read some main verbs after their subject as adjectives or punctuation (seen on UD English
+        // EWT dev: "BP shut/JJ its refinery", "Bush nominated/, two individuals"); invented log lines of the same shape.
+        PrepositionCandidates in = all("Crew/NN shut/JJ the/DT valve/NN in/IN the/DT engine/NN room/NN ./.").get(0);
+        assertEquals(HeadClass.VERB, in.headClass(in.indexOf(1)), "shut: " + in);
+        PrepositionCandidates on = all("Bosun/NNP logged/, two/CD faults/NNS on/IN Tuesday/NNP ./.").get(0);
+        assertTrue(on.indexOf(1) >= 0, "logged is a candidate: " + on);
+        assertEquals(HeadClass.VERB, on.headClass(on.indexOf(1)));
+        PrepositionCandidates plain = all("Crew/NN found/VBD the/DT valve/NN shut/JJ in/IN the/DT morning/NN ./.").get(0);
+        assertTrue(plain.indexOf(4) < 0 || plain.headClass(plain.indexOf(4)) != HeadClass.VERB,
+                "an adjective not between a subject and an object keeps its tag: " + plain);
+    }
+
+    @Test
+    void prepositionMisreadAsParticleBeforeANameOrNumberIsStillAPreposition() {
+        // "It closed on/RP Sunday", "out/RB of": EWT dev shapes, invented log lines.
+        PrepositionCandidates on = all("Ferry/NNP docked/VBD on/RP Sunday/NNP ./.").get(0);
+        assertEquals(2, on.preposition());
+        assertEquals(3, on.object());
+        List<PrepositionCandidates> out = all("Crew/NN pulled/VBD the/DT pump/NN out/RB of/IN the/DT bilge/NN ./.");
+        assertEquals(4, out.get(0).preposition(), "'out of' is proposed at 'out': " + out);
+        assertTrue(all("Crew/NN picked/VBD up/RP the/DT rope/NN ./.").isEmpty(), "a particle before a determiner stays a particle");
+    }
+
+    @Test
     void openingParticipleWithItsOwnPhraseLetsTheMainVerbFollow() {
         PrepositionCandidates on = all("Based/VBN on/IN the/DT log/NN ,/, the/DT engineer/NN replaced/VBD the/DT gasket/NN ./.").get(0);
         assertTrue(on.indexOf(7) >= 0, "'replaced' after the participle clause is a candidate: " + on);
