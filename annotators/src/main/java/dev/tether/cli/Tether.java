@@ -23,6 +23,7 @@ public final class Tether {
         register(new EvaluateCommand());
         register(new InspectCommand());
         register(new AnnotateCommand());
+        register(new ThesaurusCommand());
     }
 
     private void register(Command c) {

@@ -2,6 +2,7 @@ package dev.tether.model;
 
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
+import dev.tether.io.AtomicFileWriter;
 import dev.tether.io.Sha256;
 
 import java.io.ByteArrayInputStream;
@@ -12,13 +13,10 @@ import java.io.EOFException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -57,30 +55,7 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice());
-        Path folder = target.toAbsolutePath().getParent();
-        if (folder != null) Files.createDirectories(folder);
-        if (Files.isDirectory(target)) {
-            throw new IOException(target + " is a directory; give a file name for the model");
-        }
-        Path temporary = Files.createTempFile(folder, "." + target.getFileName(), ".partial");
-        try {
-            try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer buffer = ByteBuffer.wrap(bytes);
-                while (buffer.hasRemaining()) channel.write(buffer);
-                channel.force(true);
-            }
-            readableByAll(temporary);
-            Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(temporary);
-        }
-    }
-
-    /** Temporary files are created private; a model is meant to be shared. */
-    private static void readableByAll(Path file) throws IOException {
-        if (Files.getFileStore(file).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
-            Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-        }
+        AtomicFileWriter.write(target, bytes, "model");
     }
 
     /** Reads the model at {@code file}; a foreign, truncated or damaged file fails with a message naming it. */
