@@ -209,6 +209,38 @@ public final class ContextCounter {
     TLongIntHashMap cells() { return cells; }
     Vocabulary vocabulary() { return vocabulary; }
 
+    /**
+     * The contexts counted for one word, readable ("window:the", "object:gasket", "on:pump", ...), with their
+     * counts; for tests and inspection, not for hot paths.
+     */
+    java.util.SortedMap<String, Integer> contextsOf(HeadClass wordClass, String key) {
+        java.util.SortedMap<String, Integer> found = new java.util.TreeMap<>();
+        int id = vocabulary.id(key);
+        int t = id == Vocabulary.UNKNOWN ? -1 : targetIndex.get((wordClass.ordinal() << CLASS_SHIFT) | id);
+        if (t < 0) return found;
+        cells.forEachEntry((cell, count) -> {
+            if ((int) (cell >>> 32) == t) found.merge(describe(contextKeys.getQuick((int) cell)), count, Integer::sum);
+            return true;
+        });
+        return found;
+    }
+
+    private String describe(long contextKey) {
+        int relation = relationOf(contextKey);
+        String word = vocabulary.word(wordOf((int) contextKey));
+        String preposition = vocabulary.word((int) ((contextKey >>> PREPOSITION_SHIFT) & Vocabulary.MAX_SIZE));
+        return switch (relation) {
+            case WINDOW_WORD -> "window:" + word;
+            case OBJECT -> "object:" + word;
+            case OBJECT_OF -> "object-of:" + word;
+            case MODIFIER -> "modifier:" + word;
+            case MODIFIES -> "modifies:" + word;
+            case PREPOSITION_OBJECT -> preposition + ":" + word;
+            case PREPOSITION_HEAD -> word + ":" + preposition;
+            default -> "?" + relation;
+        };
+    }
+
     /** The class of a packed word key. */
     static int classOf(int wordKey) {
         return wordKey >>> CLASS_SHIFT;
