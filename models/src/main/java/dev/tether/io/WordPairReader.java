@@ -14,7 +14,8 @@ import java.util.List;
  *   <li>{@code word1,word2,score}: three columns, with or without a header line (a first line whose score is not a
  *       number is taken as the header).</li>
  * </ul>
- * Blank lines are skipped; any other line that does not fit fails with the file and line.
+ * Blank lines are skipped, and so are rows whose words and score are all empty (an index with nothing after it, as
+ * at the end of some distributed sets); any other line that does not fit fails with the file and line.
  */
 public final class WordPairReader {
 
@@ -40,6 +41,7 @@ public final class WordPairReader {
                 }
                 if (!isNumber(f[columns - 1].strip())) continue; // the header
             }
+            if (f.length == columns && f[columns - 1].isBlank() && f[columns - 2].isBlank() && f[columns - 3].isBlank()) continue;
             if (f.length != columns) {
                 throw new InputFormatException(file, i + 1, "has " + f.length + " columns, the file's first line " + columns);
             }

@@ -152,7 +152,7 @@ public final class ContextCounter {
             contextIndex.put(contextKey, context);
             contextKeys.add(contextKey);
         }
-        cells.adjustOrPutValue(((long) target << 32) | context, 1, 1);
+        cells.adjustOrPutValue(cellKey(target, context), 1, 1);
     }
 
     private int targetOf(int key) {
@@ -219,7 +219,7 @@ public final class ContextCounter {
         int t = id == Vocabulary.UNKNOWN ? -1 : targetIndex.get((wordClass.ordinal() << CLASS_SHIFT) | id);
         if (t < 0) return found;
         cells.forEachEntry((cell, count) -> {
-            if ((int) (cell >>> 32) == t) found.merge(describe(contextKeys.getQuick((int) cell)), count, Integer::sum);
+            if (cellTarget(cell) == t) found.merge(describe(contextKeys.getQuick(cellContext(cell))), count, Integer::sum);
             return true;
         });
         return found;
@@ -239,6 +239,31 @@ public final class ContextCounter {
             case PREPOSITION_HEAD -> word + ":" + preposition;
             default -> "?" + relation;
         };
+    }
+
+    // Trove hashes a long by folding its halves together (high ^ low), so target and context ids packed side by
+    // side would collide whenever target ^ context agree. Cell keys are therefore multiplied by an odd constant, a
+    // bijection on 64 bits that spreads the low bits into the high half, and multiplied back when read.
+    private static final long MIX = 0x9E3779B97F4A7C15L;
+    private static final long UNMIX = inverse(MIX);
+
+    static long cellKey(int target, int context) {
+        return (((long) target << 32) | (context & 0xffffffffL)) * MIX;
+    }
+
+    static int cellTarget(long cellKey) {
+        return (int) ((cellKey * UNMIX) >>> 32);
+    }
+
+    static int cellContext(long cellKey) {
+        return (int) (cellKey * UNMIX);
+    }
+
+    /** The multiplicative inverse of an odd number modulo 2^64 (Newton's iteration doubles the correct bits). */
+    private static long inverse(long odd) {
+        long x = odd;
+        for (int i = 0; i < 5; i++) x *= 2 - odd * x;
+        return x;
     }
 
     /** The class of a packed word key. */

@@ -75,8 +75,8 @@ public final class ThesaurusBuilder {
         TLongIntHashMap cells = counts.cells();
         for (TLongIntIterator it = cells.iterator(); it.hasNext(); ) {
             it.advance();
-            int w = newId[(int) (it.key() >>> 32)];
-            int c = (int) it.key();
+            int w = newId[ContextCounter.cellTarget(it.key())];
+            int c = ContextCounter.cellContext(it.key());
             if (w < 0 || !allowed[c]) continue;
             wordTotal[w] += it.value();
             contextTotal[c] += it.value();
@@ -104,8 +104,8 @@ public final class ThesaurusBuilder {
         int[] rowSize = new int[words];
         for (TLongIntIterator it = cells.iterator(); it.hasNext(); ) {
             it.advance();
-            int w = newId[(int) (it.key() >>> 32)];
-            int c = (int) it.key();
+            int w = newId[ContextCounter.cellTarget(it.key())];
+            int c = ContextCounter.cellContext(it.key());
             if (w >= 0 && contextId[c] >= 0) rowSize[w]++;
         }
         int[] start = new int[words + 1];
@@ -114,8 +114,8 @@ public final class ThesaurusBuilder {
         int[] fill = Arrays.copyOf(start, words);
         for (TLongIntIterator it = cells.iterator(); it.hasNext(); ) {
             it.advance();
-            int w = newId[(int) (it.key() >>> 32)];
-            int c = (int) it.key();
+            int w = newId[ContextCounter.cellTarget(it.key())];
+            int c = ContextCounter.cellContext(it.key());
             if (w < 0 || contextId[c] < 0) continue;
             float weight = (float) weighting.weight(it.value(), wordTotal[w], contextTotal[c], n, smoothed[c], smoothedTotal);
             packed[fill[w]++] = weight > 0 && Float.isFinite(weight)

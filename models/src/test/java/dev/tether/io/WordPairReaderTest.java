@@ -24,7 +24,7 @@ class WordPairReaderTest {
     @Test
     void readsTheIndexedFormWithItsHeader() throws IOException {
         assertEquals(List.of(new WordPairReader.WordPair("gem", "jewel", 3.94), new WordPairReader.WordPair("cord", "smile", 0.02)),
-                read(",word1,word2,similarity\n0,gem,jewel,3.94\n1,cord,smile,0.02\n"));
+                read(",word1,word2,similarity\n0,gem,jewel,3.94\n1,cord,smile,0.02\n2,,,\n"));
     }
 
     @Test
