@@ -33,8 +33,8 @@ public enum Weighting {
         }
     },
     /**
-     * The t-test of the association, {@code (P(w,c) - P(w) P(c)) / sqrt(P(w) P(c))}, positive part
-     * (Curran &amp; Moens 2002).
+     * The t-test of the association, {@code (P(w,c) - P(w) P(c)) / sqrt(P(w) P(c))}, positive part (the usual
+     * t-score approximation of collocation statistics; common practice).
      */
     TTEST("ttest") {
         @Override double weight(double fwc, double fw, double fc, double n, double smoothedFc, double smoothedTotal) {
