@@ -14,9 +14,16 @@ package dev.tether.similarity;
 public record ThesaurusSettings(ContextChoice contexts, Weighting weighting, SimilarityMeasure measure,
                                 int minFrequency, int maxContextWords, int neighbours) {
 
-    /** The defaults, chosen on the development similarity sets (see README, "Distributional thesaurus"). */
-    public static final ThesaurusSettings DEFAULT = new ThesaurusSettings(ContextChoice.ALL, Weighting.PPMI_SMOOTHED,
-            SimilarityMeasure.COSINE, 5, 2000, 50);
+    /**
+     * The defaults, chosen on the five development similarity sets with a thesaurus of the 2.8 M words of
+     * development raw text (README, "Distributional thesaurus"): window and grammatical contexts together, PPMI and
+     * cosine gave the best mean Spearman correlation (0.425; smoothed PPMI 0.424); a floor of 5 tokens keeps 89–97%
+     * of the pairs covered (10 drops RG-65 to 46%); pruning contexts shared by more than 5,000 words costs nothing
+     * measurable (mean 0.424 unpruned, 0.419 at 2,000, 0.411 at 500) and makes the neighbour search several times
+     * faster than without pruning.
+     */
+    public static final ThesaurusSettings DEFAULT = new ThesaurusSettings(ContextChoice.ALL, Weighting.PPMI,
+            SimilarityMeasure.COSINE, 5, 5000, 50);
 
     public ThesaurusSettings {
         if (contexts == null || weighting == null || measure == null) throw new IllegalArgumentException("contexts, weighting and measure are required");

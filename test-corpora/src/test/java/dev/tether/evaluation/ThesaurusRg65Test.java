@@ -19,13 +19,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class ThesaurusRg65Test {
     /**
-     * The floor. Measured with these settings on this slice: Spearman {@value #MEASURED} over 58 of 65 pairs. The
+     * The floor. The settings are the defaults except the frequency floor (3 instead of 5, for a text 28 times
+     * smaller). Measured with them on this slice: Spearman {@value #MEASURED} over 58 of 65 pairs. The
      * build is deterministic, so the floor sits just under the measurement, to catch any change that makes the
      * thesaurus worse; it is also far above chance: a random ranking of 58 pairs has a Spearman correlation of 0 with a
-     * standard deviation of 1/sqrt(57) = 0.13 (so the floor is more than 2.5 standard deviations above it).
+     * standard deviation of 1/sqrt(57) = 0.13 (so the floor is about 2.5 standard deviations above it).
      */
-    private static final double FLOOR = 0.34;
-    private static final double MEASURED = 0.3671;
+    private static final double FLOOR = 0.33;
+    private static final double MEASURED = 0.3521;
 
     @TempDir
     Path dir;
@@ -34,8 +35,8 @@ class ThesaurusRg65Test {
     void rankingOfRubensteinGoodenoughPairsCorrelatesWithTheHumanJudgements() throws Exception {
         Path thesaurus = dir.resolve("rg-65-slice.thesaurus");
         CommandLineEntry build = CommandLineEntry.run("thesaurus", "build", "--raw", "data/similarity/rg-65-slice",
-                "--out", thesaurus.toString(), "--contexts", "all", "--weighting", "ppmi-smoothed", "--measure", "cosine",
-                "--min-frequency", "3", "--threads", "2");
+                "--out", thesaurus.toString(), "--contexts", "all", "--weighting", "ppmi", "--measure", "cosine",
+                "--min-frequency", "3", "--max-context-words", "5000", "--threads", "2");
         assertEquals(0, build.exitCode(), build.toString());
         assertTrue(build.out().contains("102,864 tokens"), build.out());
 
