@@ -2,7 +2,7 @@ package dev.tether.similarity;
 
 import dev.tether.candidates.HeadClass;
 import dev.tether.io.AtomicFileWriter;
-import dev.tether.io.Sha256;
+import dev.tether.io.ChecksummedFile;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.ByteArrayInputStream;
@@ -11,8 +11,6 @@ import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.EOFException;
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -38,9 +36,9 @@ import java.util.zip.InflaterInputStream;
  */
 public final class ThesaurusFile {
     public static final int FORMAT_VERSION = 1;
-    private static final byte[] MAGIC = "TETHER-THESAURUS\n".getBytes(StandardCharsets.US_ASCII);
-    private static final int DIGEST_BYTES = 32;
-    private static final int HEADER = MAGIC.length + 4 + 8;
+    private static final ChecksummedFile.Kind KIND = new ChecksummedFile.Kind("TETHER-THESAURUS\n", "thesaurus",
+            "a file written by 'tether thesaurus build'", "copy or build it again",
+            "Build the thesaurus again with this version ('tether thesaurus build').");
 
     private ThesaurusFile() {
     }
@@ -102,47 +100,14 @@ public final class ThesaurusFile {
         } finally {
             deflater.end();
         }
-        ByteArrayOutputStream file = new ByteArrayOutputStream();
-        DataOutputStream out = new DataOutputStream(file);
-        out.write(MAGIC);
-        out.writeInt(FORMAT_VERSION);
-        out.writeLong(payload.size());
-        payload.writeTo(out);
-        out.flush();
-        byte[] body = file.toByteArray();
-        byte[] all = Arrays.copyOf(body, body.length + DIGEST_BYTES);
-        System.arraycopy(Sha256.newDigest().digest(body), 0, all, body.length, DIGEST_BYTES);
-        return all;
+        return ChecksummedFile.frame(KIND, FORMAT_VERSION, payload);
     }
 
     static Thesaurus decode(byte[] bytes, String name) throws ThesaurusFormatException {
-        if (bytes.length < MAGIC.length || !Arrays.equals(Arrays.copyOf(bytes, MAGIC.length), MAGIC)) {
-            throw new ThesaurusFormatException(name + " is not a Tether thesaurus file (it lacks the thesaurus header); "
-                    + "give the path of a file written by 'tether thesaurus build'");
-        }
-        if (bytes.length < HEADER + DIGEST_BYTES) {
-            throw new ThesaurusFormatException(name + " is truncated (" + bytes.length + " bytes); copy or build it again");
-        }
-        ByteBuffer head = ByteBuffer.wrap(bytes, MAGIC.length, 12);
-        int version = head.getInt();
-        long payloadLength = head.getLong();
-        if (version != FORMAT_VERSION) {
-            throw new ThesaurusFormatException(name + " has thesaurus format version " + version + "; this build of Tether reads version "
-                    + FORMAT_VERSION + ". Build the thesaurus again with this version ('tether thesaurus build').");
-        }
-        if (payloadLength < 0 || HEADER + payloadLength + DIGEST_BYTES != bytes.length) {
-            throw new ThesaurusFormatException(name + " is truncated or has trailing bytes (expected "
-                    + (HEADER + payloadLength + DIGEST_BYTES) + " bytes, found " + bytes.length + "); copy or build it again");
-        }
-        int bodyLength = bytes.length - DIGEST_BYTES;
-        var digest = Sha256.newDigest();
-        digest.update(bytes, 0, bodyLength);
-        if (!Arrays.equals(digest.digest(), Arrays.copyOfRange(bytes, bodyLength, bytes.length))) {
-            throw new ThesaurusFormatException(name + " is damaged: its checksum does not match its content; copy or build it again");
-        }
+        ChecksummedFile.Payload framed = ChecksummedFile.open(bytes, KIND, FORMAT_VERSION, name, ThesaurusFormatException::new);
         Inflater inflater = new Inflater();
         try (DataInputStream in = new DataInputStream(new InflaterInputStream(
-                new ByteArrayInputStream(bytes, HEADER, (int) payloadLength), inflater, 1 << 16))) {
+                new ByteArrayInputStream(bytes, framed.offset(), framed.length()), inflater, 1 << 16))) {
             String normalizer = in.readUTF();
             if (!normalizer.equals(WordNormalizer.VERSION)) {
                 throw new ThesaurusFormatException(name + " keys its words with normalization '" + normalizer
