@@ -57,7 +57,7 @@ final class ThesaurusCommand implements Command {
         boolean help = List.of(args).subList(1, args.length).contains("--help");
         switch (verb) {
             case "--help", "help" -> {
-                printHelp(out);
+                out.print(help());
                 return Tether.OK;
             }
             case "build" -> {
@@ -103,18 +103,19 @@ final class ThesaurusCommand implements Command {
               --json                   print one JSON object: spearman, coverage, n (pairs covered), pairs
             """;
 
+    /**
+     * Every sub-command with its options (what {@code tether thesaurus --help} prints; a command line that answers
+     * {@code --help} for the whole verb prints this too).
+     */
+    public String help() {
+        return "usage: tether " + BUILD + "\n" + BUILD_HELP + "usage: tether " + QUERY + "\n" + QUERY_HELP
+                + "usage: tether " + EVALUATE + "\n" + EVALUATE_HELP;
+    }
+
     private static int help(PrintStream out, String usage, String options) {
         out.println("usage: tether " + usage);
         out.print(options);
         return Tether.OK;
-    }
-
-    private static void printHelp(PrintStream out) {
-        out.println("usage: tether thesaurus build|query|evaluate [options]");
-        out.println("  " + BUILD);
-        out.println("  " + QUERY);
-        out.println("  " + EVALUATE);
-        out.println("'tether thesaurus <command> --help' describes the options.");
     }
 
     private int build(String[] args, PrintStream out) throws UsageException, IOException {
