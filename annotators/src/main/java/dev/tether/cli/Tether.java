@@ -34,6 +34,7 @@ public final class Tether {
             AnnotateCommand::new,
             EvaluateCommand::new,
             InspectCommand::new,
+            ThesaurusCommand::new,
             TrainCommand::new);
 
     private final Map<String, Command> commands = new TreeMap<>();

@@ -3,6 +3,8 @@ package dev.tether.model;
 import dev.tether.attachment.AttachmentRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
+import dev.tether.io.AtomicFileWriter;
+import dev.tether.io.ChecksummedFile;
 import dev.tether.io.Sha256;
 
 import java.io.ByteArrayInputStream;
@@ -12,14 +14,9 @@ import java.io.DataOutputStream;
 import java.io.EOFException;
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -48,8 +45,8 @@ import java.util.zip.InflaterInputStream;
  */
 public final class ModelFile {
     public static final int FORMAT_VERSION = 2;
-    private static final byte[] MAGIC = "TETHER-MODEL\n".getBytes(StandardCharsets.US_ASCII);
-    private static final int DIGEST_BYTES = 32;
+    private static final ChecksummedFile.Kind KIND = new ChecksummedFile.Kind("TETHER-MODEL\n", "model",
+            "a model written by 'tether train'", "copy or train it again", "Retrain the model with this version ('tether train').");
     private static final String INFO = "info";
     private static final String QUADRUPLES = "quadruples";
     private static final String HEAD_CHOICE = "head-choice";
@@ -63,30 +60,7 @@ public final class ModelFile {
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
                 model.attachmentRanker().orElse(null), model.tagger().orElse(null));
-        Path folder = target.toAbsolutePath().getParent();
-        if (folder != null) Files.createDirectories(folder);
-        if (Files.isDirectory(target)) {
-            throw new IOException(target + " is a directory; give a file name for the model");
-        }
-        Path temporary = Files.createTempFile(folder, "." + target.getFileName(), ".partial");
-        try {
-            try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer buffer = ByteBuffer.wrap(bytes);
-                while (buffer.hasRemaining()) channel.write(buffer);
-                channel.force(true);
-            }
-            readableByAll(temporary);
-            Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(temporary);
-        }
-    }
-
-    /** Temporary files are created private; a model is meant to be shared. */
-    private static void readableByAll(Path file) throws IOException {
-        if (Files.getFileStore(file).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
-            Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-        }
+        AtomicFileWriter.write(target, bytes, "model");
     }
 
     /** Reads the model at {@code file}; a foreign, truncated or damaged file fails with a message naming it. */
@@ -151,50 +125,14 @@ public final class ModelFile {
         } finally {
             deflater.end();
         }
-        ByteArrayOutputStream file = new ByteArrayOutputStream();
-        DataOutputStream out = new DataOutputStream(file);
-        out.write(MAGIC);
-        out.writeInt(FORMAT_VERSION);
-        out.writeLong(payload.size());
-        payload.writeTo(out);
-        out.flush();
-        byte[] body = file.toByteArray();
-        byte[] digest = Sha256.newDigest().digest(body);
-        byte[] all = Arrays.copyOf(body, body.length + DIGEST_BYTES);
-        System.arraycopy(digest, 0, all, body.length, DIGEST_BYTES);
-        return all;
+        return ChecksummedFile.frame(KIND, FORMAT_VERSION, payload);
     }
 
     static TetherModel decode(byte[] bytes, String name) throws ModelFormatException {
-        int header = MAGIC.length + 4 + 8;
-        if (bytes.length < MAGIC.length || !Arrays.equals(Arrays.copyOf(bytes, MAGIC.length), MAGIC)) {
-            throw new ModelFormatException(name + " is not a Tether model file (it lacks the model header); "
-                    + "give the path of a model written by 'tether train'");
-        }
-        if (bytes.length < header + DIGEST_BYTES) {
-            throw new ModelFormatException(name + " is truncated (" + bytes.length + " bytes); copy or train it again");
-        }
-        ByteBuffer head = ByteBuffer.wrap(bytes, MAGIC.length, 12);
-        int version = head.getInt();
-        long payloadLength = head.getLong();
-        if (version != FORMAT_VERSION) {
-            throw new ModelFormatException(name + " has model format version " + version + "; this build of Tether reads version "
-                    + FORMAT_VERSION + ". Retrain the model with this version ('tether train').");
-        }
-        if (payloadLength < 0 || header + payloadLength + DIGEST_BYTES != bytes.length) {
-            throw new ModelFormatException(name + " is truncated or has trailing bytes (expected "
-                    + (header + payloadLength + DIGEST_BYTES) + " bytes, found " + bytes.length + "); copy or train it again");
-        }
-        int bodyLength = bytes.length - DIGEST_BYTES;
-        byte[] expected = Arrays.copyOfRange(bytes, bodyLength, bytes.length);
-        var digest = Sha256.newDigest();
-        digest.update(bytes, 0, bodyLength);
-        byte[] actual = digest.digest();
-        if (!Arrays.equals(expected, actual)) {
-            throw new ModelFormatException(name + " is damaged: its checksum does not match its content; copy or train it again");
-        }
+        ChecksummedFile.Payload framed = ChecksummedFile.open(bytes, KIND, FORMAT_VERSION, name, ModelFormatException::new);
+        byte[] actual = framed.digest();
         try {
-            Map<String, byte[]> sections = sections(bytes, header, (int) payloadLength);
+            Map<String, byte[]> sections = sections(bytes, framed.offset(), framed.length());
             byte[] info = sections.get(INFO);
             byte[] quads = sections.get(QUADRUPLES);
             byte[] heads = sections.get(HEAD_CHOICE);
@@ -237,7 +175,7 @@ public final class ModelFile {
 
     /** A fingerprint of the content that would be written for these parts. */
     static String fingerprint(byte[] encoded) {
-        return Sha256.hex(Arrays.copyOfRange(encoded, 0, encoded.length - DIGEST_BYTES)).substring(0, 12);
+        return Sha256.hex(Arrays.copyOfRange(encoded, 0, encoded.length - ChecksummedFile.DIGEST_BYTES)).substring(0, 12);
     }
 
     private static Map<String, byte[]> sections(byte[] bytes, int offset, int length) throws IOException {

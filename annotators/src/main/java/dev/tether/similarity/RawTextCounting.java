@@ -1,0 +1,177 @@
+package dev.tether.similarity;
+
+import dev.tether.io.InputFormatException;
+import dev.tether.io.Utf8Text;
+import dev.tether.pipeline.DocumentFiles;
+import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
+import org.apache.uima.resource.ResourceInitializationException;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Deque;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+/**
+ * Counts the contexts of raw text files for a thesaurus: every document is read as UTF-8, tagged by the built-in
+ * preprocessing on {@code threads} threads, and counted by one {@link ContextCounter} in document order, so that
+ * the counts (and their ids) do not depend on the thread count. Memory holds the counts and the few documents in
+ * flight, not the corpus.
+ *
+ * <p>A document that is empty (or blank), binary (it holds NUL bytes) or not valid UTF-8 is skipped and counted by
+ * reason in the {@link Summary}; so is one that cannot be read.
+ */
+public final class RawTextCounting {
+    /** Why a document was skipped. */
+    public enum Skip {
+        EMPTY("empty"), BINARY("binary"), ENCODING("not valid UTF-8"), UNREADABLE("unreadable");
+
+        private final String label;
+
+        Skip(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
+        }
+    }
+
+    /** What was counted: documents, skipped documents by reason (with their files), sentences and tokens. */
+    public record Summary(int documents, Map<Skip, List<String>> skipped, long sentences, long tokens, double seconds) {
+        public int skippedCount() {
+            int n = 0;
+            for (List<String> files : skipped.values()) n += files.size();
+            return n;
+        }
+    }
+
+    private final int threads;
+
+    public RawTextCounting(int threads) {
+        if (threads < 1) throw new IllegalArgumentException("--threads must be at least 1, was " + threads);
+        this.threads = threads;
+    }
+
+    /** Receives the tagged sentences of the counted documents, in document order. */
+    public interface SentenceSink {
+        void addSentence(String[] words, String[] tags);
+    }
+
+    /** Counts every document under {@code inputs} (files, or folders of {@code .txt} files) into {@code counter}. */
+    public Summary count(List<Path> inputs, ContextCounter counter) throws IOException {
+        return count(inputs, counter::addSentence);
+    }
+
+    /** Tags every document under {@code inputs} and hands its sentences to {@code sink}, in document order. */
+    public Summary count(List<Path> inputs, SentenceSink sink) throws IOException {
+        long start = System.nanoTime();
+        List<Path> files = new ArrayList<>();
+        for (Path p : inputs) files.addAll(DocumentFiles.list(p).documents());
+        Map<Skip, List<String>> skipped = new LinkedHashMap<>();
+        int counted = 0;
+        long sentences = 0, tokens = 0;
+        List<RawTextTagger> taggers = Collections.synchronizedList(new ArrayList<>());
+        ThreadLocal<RawTextTagger> tagger = ThreadLocal.withInitial(() -> {
+            try {
+                RawTextTagger t = new RawTextTagger();
+                taggers.add(t);
+                return t;
+            } catch (ResourceInitializationException e) {
+                throw new IllegalStateException("cannot start the built-in preprocessing: " + e.getMessage(), e);
+            }
+        });
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "thesaurus-tagging");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            Deque<Future<Document>> inFlight = new ArrayDeque<>();
+            int next = 0;
+            while (next < files.size() || !inFlight.isEmpty()) {
+                while (next < files.size() && inFlight.size() < 2 * threads) {
+                    Path file = files.get(next++);
+                    inFlight.add(pool.submit(() -> Document.of(file, tagger.get())));
+                }
+                Document d = take(inFlight.poll());
+                if (d.skip != null) {
+                    skipped.computeIfAbsent(d.skip, k -> new ArrayList<>()).add(d.reason);
+                    continue;
+                }
+                for (int i = 0; i < d.text.words().size(); i++) {
+                    sink.addSentence(d.text.words().get(i), d.text.tags().get(i));
+                    sentences++;
+                    tokens += d.text.words().get(i).length;
+                }
+                counted++;
+            }
+        } finally {
+            pool.shutdownNow();
+            for (RawTextTagger t : taggers) t.close();
+        }
+        return new Summary(counted, skipped, sentences, tokens, (System.nanoTime() - start) / 1e9);
+    }
+
+    private static Document take(Future<Document> f) throws IOException {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("counting interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException r) throw r;
+            throw new IOException(cause.getMessage(), cause);
+        }
+    }
+
+    /** One document: tagged, or skipped with a reason that names the file. */
+    private static final class Document {
+        final Path file;
+        final RawTextTagger.TaggedText text;
+        final Skip skip;
+        final String reason;
+
+        private Document(Path file, RawTextTagger.TaggedText text, Skip skip, String reason) {
+            this.file = file;
+            this.text = text;
+            this.skip = skip;
+            this.reason = reason;
+        }
+
+        static Document of(Path file, RawTextTagger tagger) {
+            byte[] bytes;
+            try {
+                bytes = Files.readAllBytes(file);
+            } catch (IOException e) {
+                return new Document(file, null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + ")");
+            }
+            for (byte b : bytes) {
+                if (b == 0) return new Document(file, null, Skip.BINARY, file + ": holds NUL bytes, a binary file");
+            }
+            String text;
+            try {
+                text = Utf8Text.decode(file, bytes);
+            } catch (InputFormatException e) {
+                return new Document(file, null, Skip.ENCODING, e.getMessage());
+            }
+            if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
+            if (text.isBlank()) return new Document(file, null, Skip.EMPTY, file + ": empty");
+            try {
+                return new Document(file, tagger.tag(text), null, null);
+            } catch (AnalysisEngineProcessException | RuntimeException e) {
+                return new Document(file, null, Skip.UNREADABLE, file + ": preprocessing failed (" + e.getMessage() + ")");
+            }
+        }
+    }
+}

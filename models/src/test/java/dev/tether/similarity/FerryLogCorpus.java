@@ -1,0 +1,41 @@
+package dev.tether.similarity;
+
+import java.util.Random;
+
+/**
+ * Invented, tagged sentences in the style of a ferry operator's maintenance logs, drawn from small word lists with a
+ * fixed seed: parts are replaced, inspected and cleaned on engines and pumps, crew members do the work. Parts and
+ * crew occur in different slots, so a thesaurus should find parts like parts and crew like crew.
+ */
+final class FerryLogCorpus {
+    static final String[] CREW = {"engineer", "deckhand", "mechanic", "mate", "skipper"};
+    static final String[] PARTS = {"gasket", "valve", "seal", "filter", "impeller", "hose", "belt"};
+    static final String[] MACHINES = {"pump", "engine", "winch", "compressor", "generator"};
+    static final String[] VERBS = {"replaced", "inspected", "cleaned", "checked", "tightened"};
+    static final String[] STATES = {"worn", "cracked", "loose", "new", "spare"};
+
+    private FerryLogCorpus() {
+    }
+
+    /** Feeds {@code sentences} sentences to {@code counter}. */
+    static ContextCounter count(int sentences, long seed) {
+        ContextCounter counter = new ContextCounter();
+        Random r = new Random(seed);
+        for (int i = 0; i < sentences; i++) {
+            String crew = pick(r, CREW), verb = pick(r, VERBS), state = pick(r, STATES), part = pick(r, PARTS),
+                    machine = pick(r, MACHINES);
+            if (r.nextBoolean()) {
+                counter.addSentence(new String[] {"The", crew, verb, "the", state, part, "on", "the", machine, "."},
+                        new String[] {"DT", "NN", "VBD", "DT", "JJ", "NN", "IN", "DT", "NN", "."});
+            } else {
+                counter.addSentence(new String[] {"The", crew, "on", "the", machine, "deck", verb, "a", part, "."},
+                        new String[] {"DT", "NN", "IN", "DT", "NN", "NN", "VBD", "DT", "NN", "."});
+            }
+        }
+        return counter;
+    }
+
+    private static String pick(Random r, String[] words) {
+        return words[r.nextInt(words.length)];
+    }
+}
