@@ -94,22 +94,20 @@ public class ResolutionThroughput {
 
     @Benchmark
     public int finderAndResolver() throws Exception {
-        int decisions = 0;
-        for (JCas jcas : tagged) {
-            removeOutputs(jcas);
-            resolution.process(jcas);
-            decisions += JCasUtil.select(jcas, AttachmentDecision.class).size();
-        }
-        return decisions;
+        return resolveAll(resolution);
     }
 
     /** The same with the count-based score instead of the learned ranker (the ranker's baseline). */
     @Benchmark
     public int finderAndCountScore() throws Exception {
+        return resolveAll(countResolution);
+    }
+
+    private int resolveAll(AnalysisEngine engine) throws Exception {
         int decisions = 0;
         for (JCas jcas : tagged) {
             removeOutputs(jcas);
-            countResolution.process(jcas);
+            engine.process(jcas);
             decisions += JCasUtil.select(jcas, AttachmentDecision.class).size();
         }
         return decisions;

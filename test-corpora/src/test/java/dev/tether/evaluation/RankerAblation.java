@@ -6,6 +6,8 @@ import dev.tether.io.QuadrupleReader;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
+import dev.tether.model.TaggerSection;
+import dev.tether.preprocessing.TreebankTaggerTrainer;
 import dev.tether.model.TetherModel;
 import dev.tether.pipeline.TetherPipeline;
 import dev.tether.ranking.Lbfgs;
@@ -25,7 +27,8 @@ import java.util.Locale;
  * A measurement, not a test: trains the default model's sources (RRR training quadruples of Ratnaparkhi, Reynar
  * &amp; Roukos 1994; UD English EWT train, Silveira et al. 2014) with each ranker feature family removed in turn, and
  * with 25/50/75/100% of the EWT training examples, and scores every model on EWT dev end to end (raw text) and with
- * gold tags, beside the count-based score of the same run. Reads the dev split from {@code ../shared/datasets}.
+ * gold tags, beside the count-based score of the same run. Every model carries the same tagger, trained once on EWT
+ * train as the default model's is. Reads the dev split from {@code ../shared/datasets}.
  *
  * <pre>
  * mvn -q -pl test-corpora -am test-compile
@@ -35,6 +38,8 @@ import java.util.Locale;
  * instead of cross-validating, for exploration; the README's table is made without it. See DEVELOPERS.md.
  */
 public final class RankerAblation {
+    private static TaggerSection tagger;
+
     private RankerAblation() {
     }
 
@@ -49,6 +54,10 @@ public final class RankerAblation {
         TreebankExamples ewt = new TreebankExampleExtractor(new HeadCandidateProposer())
                 .extract(root.resolve("test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz"));
         TreebankExamples devGold = new TreebankExampleExtractor(new HeadCandidateProposer()).extract(dev);
+        // Every model carries the default model's tagger (trained once on EWT train), so only the ranker differs.
+        TreebankTaggerTrainer taggerTrainer = new TreebankTaggerTrainer();
+        taggerTrainer.add(root.resolve("test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz"));
+        tagger = taggerTrainer.train();
         System.out.printf("%-28s %9s %9s %9s %9s %9s%n", "configuration", "e2e", "e2e-count", "gold-tags", "gold-count", "train-s");
         for (String w : what) {
             if (w.equals("full")) run("all families", EnumSet.allOf(AttachmentFeatureFamily.class), 1.0, rrr, ewt, devGold, dev, quick);
@@ -71,7 +80,7 @@ public final class RankerAblation {
     private static void run(String name, EnumSet<AttachmentFeatureFamily> families, double share, QuadrupleSet rrr,
                             TreebankExamples ewt, TreebankExamples devGold, Path dev, boolean quick) throws Exception {
         long start = System.nanoTime();
-        ModelTrainer trainer = new ModelTrainer().rankerFamilies(families);
+        ModelTrainer trainer = new ModelTrainer().rankerFamilies(families).withTagger(tagger);
         if (quick) trainer.rankerTrainer(new RankerTrainer(new double[] {10}, 1, new Lbfgs(400, 1e-7)));
         trainer.addQuadruples(rrr);
         trainer.addTreebank(share < 1 ? ewt.firstShare(share) : ewt, "en_ewt-ud-train.conllu.gz", "-");
