@@ -2,6 +2,7 @@ package dev.tether.attachment;
 
 import dev.tether.candidates.HeadClass;
 import dev.tether.model.LoadedModels;
+import dev.tether.ranking.CandidateFeatures;
 import dev.tether.model.ModelHolder;
 import dev.tether.model.TetherModel;
 import dev.tether.type.AttachmentAmbiguity;
@@ -60,6 +61,10 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
 
     private TetherModel model;
     private boolean countsOnly;
+    /** The ranker in use, or null when the count-based score chooses. */
+    private AttachmentRanker ranker;
+    /** Features of the decision at hand, reused for its evidence (one buffer per engine instance). */
+    private final CandidateFeatures features = new CandidateFeatures();
     private long decisions;
     private long withoutCandidates;
     private long documents;
@@ -82,6 +87,7 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
             throw new ResourceInitializationException(new IOException("cannot load the model given by parameter "
                     + PARAM_MODEL + ": " + e.getMessage(), e));
         }
+        ranker = countsOnly ? null : model.attachmentRanker().orElse(null);
         getLogger().log(Level.CONFIG, "attachment resolver uses model " + model.id()
                 + (model.attachmentRanker().isPresent() ? " (learned ranker)" : " (count-based score: the model has no ranker)"));
     }
@@ -104,7 +110,7 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
                 continue;
             }
             AttachmentQuery query = query(a);
-            HeadChoice choice = countsOnly ? model.headChoiceScorer().choose(query) : model.chooseHead(query);
+            HeadChoice choice = ranker == null ? model.headChoiceScorer().choose(query) : ranker.choose(query, features);
             write(jcas, a, query, choice);
             decisions++;
         }
@@ -171,8 +177,8 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
         }
         d.setRanking(ranking);
         d.setEvidenceLevel(choice.evidence(best).label());
-        d.setEvidenceCounts(String.format(Locale.ROOT, "%.0f/%.0f", choice.evidenceHits(best), choice.evidenceTrials(best)));
-        d.setEvidence(EvidenceText.describe(countsOnly ? null : model.attachmentRanker().orElse(null), q, choice, best));
+        d.setEvidenceCounts(Math.round(choice.evidenceHits(best)) + "/" + Math.round(choice.evidenceTrials(best)));
+        d.setEvidence(ranker == null ? EvidenceText.describe(q, choice, best) : EvidenceText.describe(ranker, q, choice, best, features));
         d.setModelId(model.id());
         d.addToIndexes();
     }

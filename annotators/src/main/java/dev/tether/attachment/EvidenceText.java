@@ -1,5 +1,7 @@
 package dev.tether.attachment;
 
+import dev.tether.ranking.CandidateFeatures;
+
 import java.util.Locale;
 
 /** Says in words why a head was chosen, for reviewers. */
@@ -10,14 +12,16 @@ final class EvidenceText {
     private EvidenceText() {
     }
 
-    /** Why candidate {@code i} was chosen; {@code ranker} is null when the count-based score chose. */
-    static String describe(AttachmentRanker ranker, AttachmentQuery q, HeadChoice choice, int i) {
-        String counts = countEvidence(q, choice, i);
-        if (ranker == null) {
-            return String.format(Locale.ROOT, "%s (%s, p=%.2f, margin %.2f over the runner-up)", counts,
-                    q.headClass(i).label(), choice.probability(i), choice.margin());
-        }
-        return AttachmentRanker.sentence(q, choice, ranker.explain(q, choice, REASONS)) + ". Counts: " + counts;
+    /** Why the count-based score chose candidate {@code i}. */
+    static String describe(AttachmentQuery q, HeadChoice choice, int i) {
+        return String.format(Locale.ROOT, "%s (%s, p=%.2f, margin %.2f over the runner-up)", countEvidence(q, choice, i),
+                q.headClass(i).label(), choice.probability(i), choice.margin());
+    }
+
+    /** Why the ranker chose candidate {@code i}; {@code features} are the query's, as {@code choose} left them. */
+    static String describe(AttachmentRanker ranker, AttachmentQuery q, HeadChoice choice, int i, CandidateFeatures features) {
+        return AttachmentRanker.sentence(q, choice, ranker.explain(q, choice, features, REASONS)) + ". Counts: "
+                + countEvidence(q, choice, i);
     }
 
     /** Which count statistic spoke for candidate {@code i}, with its counts. */
@@ -26,7 +30,8 @@ final class EvidenceText {
         String cls = q.headClass(i).label();
         String p = q.preposition();
         String o = q.object();
-        String counts = String.format(Locale.ROOT, "the head in %.0f of %.0f training cases", choice.evidenceHits(i), choice.evidenceTrials(i));
+        String counts = "the head in " + Math.round(choice.evidenceHits(i)) + " of " + Math.round(choice.evidenceTrials(i))
+                + " training cases";
         // HEAD pools the head word's counts with its class's counts for this object, as HeadChoiceScorer does.
         switch (choice.evidence(i)) {
             case HEAD_WITH_OBJECT: return "'" + head + " ... " + p + " " + o + "' was " + counts;

@@ -13,7 +13,6 @@ import java.io.IOException;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 
 /**
@@ -43,8 +42,15 @@ public final class AttachmentRanker {
     public Set<AttachmentFeatureFamily> families() { return EnumSet.copyOf(families); }
 
     public HeadChoice choose(AttachmentQuery q) {
+        return choose(q, buffers.get());
+    }
+
+    /**
+     * As {@link #choose(AttachmentQuery)}, extracting into the caller's buffer, which then holds the query's features
+     * for {@link #explain(AttachmentQuery, HeadChoice, CandidateFeatures, int)} (one buffer per thread).
+     */
+    public HeadChoice choose(AttachmentQuery q, CandidateFeatures f) {
         if (q.size() == 0) throw new IllegalArgumentException("no candidate heads for '" + q.preposition() + "'");
-        CandidateFeatures f = buffers.get();
         HeadChoice base = extractor.extract(q, f);
         double[] p = new double[q.size()];
         weights.probabilities(f, p);
@@ -60,25 +66,28 @@ public final class AttachmentRanker {
      * weight times the difference of its values, largest first, at most {@code limit}, only those in favour.
      */
     public List<Reason> explain(AttachmentQuery q, HeadChoice choice, int limit) {
+        CandidateFeatures f = new CandidateFeatures();
+        extractor.extract(q, f);
+        return explain(q, choice, f, limit);
+    }
+
+    /** As {@link #explain(AttachmentQuery, HeadChoice, int)}, from the features {@link #choose} left in {@code f}. */
+    public List<Reason> explain(AttachmentQuery q, HeadChoice choice, CandidateFeatures f, int limit) {
         List<Reason> reasons = new ArrayList<>();
         int best = choice.best();
         int second = choice.runnerUp();
         if (best < 0 || second < 0) return reasons;
-        CandidateFeatures f = new CandidateFeatures();
-        extractor.extract(q, f);
-        int n = f.to(best) - f.from(best) + f.to(second) - f.from(second);
-        long[] keys = new long[n];
-        double[] pull = new double[n];
+        // Each feature's pull: its weight times (value for the best - value for the runner-up), over the union of the
+        // two candidates' keys, by a merge of their entries sorted by key.
+        long[] bk = sortedKeys(f, best);
+        long[] sk = sortedKeys(f, second);
+        long[] keys = new long[bk.length + sk.length];
+        double[] pull = new double[keys.length];
         int k = 0;
-        for (int e = f.from(best); e < f.to(best); e++) {
-            long key = f.key(e);
-            if (indexOf(keys, k, key) >= 0) continue;
-            keys[k] = key;
-            pull[k++] = weights.weightOf(key) * (f.valueOf(best, key) - f.valueOf(second, key));
-        }
-        for (int e = f.from(second); e < f.to(second); e++) {
-            long key = f.key(e);
-            if (indexOf(keys, k, key) >= 0) continue;
+        for (int i = 0, j = 0; i < bk.length || j < sk.length; ) {
+            long key = j >= sk.length || (i < bk.length && bk[i] <= sk[j]) ? bk[i] : sk[j];
+            while (i < bk.length && bk[i] == key) i++;
+            while (j < sk.length && sk[j] == key) j++;
             keys[k] = key;
             pull[k++] = weights.weightOf(key) * (f.valueOf(best, key) - f.valueOf(second, key));
         }
@@ -99,22 +108,39 @@ public final class AttachmentRanker {
     public static String sentence(AttachmentQuery q, HeadChoice choice, List<Reason> reasons) {
         int best = choice.best();
         int second = choice.runnerUp();
-        if (second < 0) return String.format(Locale.ROOT, "'%s' (%s) is the only candidate", q.head(best), q.headClass(best).label());
-        StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "'%s' (%s, p=%.2f) over '%s' (%s, p=%.2f)",
-                q.head(best), q.headClass(best).label(), choice.probability(best),
-                q.head(second), q.headClass(second).label(), choice.probability(second)));
+        if (second < 0) return "'" + q.head(best) + "' (" + q.headClass(best).label() + ") is the only candidate";
+        StringBuilder s = new StringBuilder(160);
+        s.append('\'').append(q.head(best)).append("' (").append(q.headClass(best).label()).append(", p=");
+        twoDecimals(choice.probability(best), s).append(") over '").append(q.head(second)).append("' (")
+                .append(q.headClass(second).label()).append(", p=");
+        twoDecimals(choice.probability(second), s).append(')');
         if (reasons.isEmpty()) return s.append(": no single feature stands out").toString();
         s.append(", mainly for ");
         for (int i = 0; i < reasons.size(); i++) {
             if (i > 0) s.append(i == reasons.size() - 1 ? " and " : "; ");
-            s.append(reasons.get(i).text()).append(String.format(Locale.ROOT, " (+%.2f)", reasons.get(i).weight()));
+            twoDecimals(reasons.get(i).weight(), s.append(reasons.get(i).text()).append(" (+")).append(')');
         }
         return s.toString();
     }
 
-    private static int indexOf(long[] keys, int n, long key) {
-        for (int i = 0; i < n; i++) if (keys[i] == key) return i;
-        return -1;
+    /**
+     * Appends {@code v} rounded to two decimals ("0.82", "-1.05"); the evidence of every decision is built with it, so
+     * it avoids the cost of a format string.
+     */
+    public static StringBuilder twoDecimals(double v, StringBuilder s) {
+        long hundredths = Math.round(Math.abs(v) * 100);
+        if (v < 0 && hundredths > 0) s.append('-');
+        s.append(hundredths / 100).append('.');
+        long rest = hundredths % 100;
+        if (rest < 10) s.append('0');
+        return s.append(rest);
+    }
+
+    private static long[] sortedKeys(CandidateFeatures f, int candidate) {
+        long[] keys = new long[f.to(candidate) - f.from(candidate)];
+        for (int e = f.from(candidate); e < f.to(candidate); e++) keys[e - f.from(candidate)] = f.key(e);
+        java.util.Arrays.sort(keys);
+        return keys;
     }
 
     /** Writes the ranker's version, families and weights (a model file section). */
