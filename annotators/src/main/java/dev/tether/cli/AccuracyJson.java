@@ -2,6 +2,7 @@ package dev.tether.cli;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.tether.evaluation.Accuracy;
+import dev.tether.evaluation.PairedComparison;
 
 import java.io.IOException;
 
@@ -27,5 +28,20 @@ final class AccuracyJson {
         g.writeNumber(i[0]);
         g.writeNumber(i[1]);
         g.writeEndArray();
+    }
+
+    /** The model against the count-based score on the same items: who alone was right, and the McNemar p-value. */
+    static void versusCountScore(JsonGenerator g, PairedComparison c) throws IOException {
+        g.writeObjectFieldStart("versusCountScore");
+        g.writeNumberField("modelOnlyRight", c.firstOnly());
+        g.writeNumberField("countScoreOnlyRight", c.secondOnly());
+        g.writeNumberField("mcnemarP", c.pValue());
+        g.writeEndObject();
+    }
+
+    /** The same as one line of a text report. */
+    static String versusCountScoreLine(PairedComparison c) {
+        return String.format(java.util.Locale.ROOT, "%-28s model alone right %,d, count-score alone right %,d (exact McNemar p = %.2g)",
+                "versus count-score", c.firstOnly(), c.secondOnly(), c.pValue());
     }
 }

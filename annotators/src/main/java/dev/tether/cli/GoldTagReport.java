@@ -42,6 +42,7 @@ final class GoldTagReport {
                 AccuracyJson.fields(g, a);
                 g.writeNumberField("candidateRecall", e.candidateRecall().value());
                 g.writeNumberField("calibration_error", e.calibration().ece());
+                AccuracyJson.versusCountScore(g, e.versusCountScore());
                 g.writeEndObject();
                 g.writeObjectFieldStart("baselines");
                 for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
@@ -57,7 +58,8 @@ final class GoldTagReport {
             for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) {
                 out.printf("%-28s %7.2f%%  (%,d of %,d)%n", c.getKey(), 100 * c.getValue().value(), c.getValue().correct(), c.getValue().total());
             }
-            out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
+            out.println(AccuracyJson.versusCountScoreLine(e.versusCountScore()));
+        out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
             out.printf("%-28s %8.4f  (%d equal-width bins)%n", "expected calibration error", e.calibration().ece(), e.calibration().bins());
         }
         if (report != null) {

@@ -62,6 +62,7 @@ final class RunningTextReport {
             double[] i = b.getValue().interval95();
             out.printf("%-28s %7.2f%%  [%.2f, %.2f]%n", b.getKey(), 100 * b.getValue().value(), 100 * i[0], 100 * i[1]);
         }
+        out.println(AccuracyJson.versusCountScoreLine(e.versusCountScore()));
         out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
         out.printf("%-28s %8d%n", "prepositions not decided", e.missedPrepositions());
         out.printf("%-28s %8.4f  (%d equal-width bins, %,d decisions)%n", "expected calibration error", e.calibration().ece(),
@@ -89,6 +90,7 @@ final class RunningTextReport {
             AccuracyJson.fields(g, a);
             g.writeNumberField("candidateRecall", e.candidateRecall().value());
             g.writeNumberField("calibration_error", e.calibration().ece());
+            AccuracyJson.versusCountScore(g, e.versusCountScore());
             g.writeNumberField("missedPrepositions", e.missedPrepositions());
             g.writeNumberField("decisions", e.decisions());
             g.writeObjectFieldStart("byHeadClass");

@@ -21,6 +21,7 @@ public final class RunningTextEvaluation {
     final Accuracy attachment = new Accuracy();
     final Accuracy candidateRecall = new Accuracy();
     final CalibrationError calibration = new CalibrationError();
+    final PairedComparison versusCountScore = new PairedComparison();
     final Map<String, Accuracy> byHeadClass = new LinkedHashMap<>();
     final Map<String, Accuracy> baselines = new LinkedHashMap<>();
     long sentences;
@@ -41,6 +42,8 @@ public final class RunningTextEvaluation {
     public Accuracy candidateRecall() { return candidateRecall; }
     /** Stated probability against correctness of every decision that answers a gold attachment. */
     public CalibrationError calibration() { return calibration; }
+    /** The model's decisions against the count-based score's on the same gold attachments (first: the model). */
+    public PairedComparison versusCountScore() { return versusCountScore; }
     /** Accuracy by the class of the gold head. */
     public Map<String, Accuracy> byHeadClass() { return byHeadClass; }
     public Map<String, Accuracy> baselines() { return baselines; }

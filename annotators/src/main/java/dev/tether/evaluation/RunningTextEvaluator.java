@@ -133,6 +133,7 @@ public final class RunningTextEvaluator {
             countRight = c >= 0 && overlaps((Annotation) ambiguity.getCandidates().get(c), hb, he);
         }
         result.baselines.get(RunningTextEvaluation.COUNT_SCORE).add(countRight);
+        result.versusCountScore.add(right, countRight);
         result.baselines.get(RunningTextEvaluation.NEAREST_NOUN_OR_VERB).add(nearestRight);
         result.baselines.get(RunningTextEvaluation.VERB_OR_FIRST_NOUN).add(binaryRight);
     }

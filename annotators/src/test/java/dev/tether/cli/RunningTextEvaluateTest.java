@@ -62,6 +62,15 @@ class RunningTextEvaluateTest {
         // A decision is right only when its head was among the candidates.
         assertTrue(accuracy <= recall + 1e-12, () -> "accuracy " + accuracy + " above candidate recall " + recall);
 
+        // The paired comparison with the count-based score adds up with both accuracies of the same run.
+        JsonNode versus = attachment.get("versusCountScore");
+        assertNotNull(versus, run::toString);
+        int countCorrect = json.at("/baselines/count-score/correct").asInt();
+        assertEquals(attachment.get("correct").asInt() - countCorrect,
+                versus.get("modelOnlyRight").asInt() - versus.get("countScoreOnlyRight").asInt(), versus::toString);
+        double p = versus.get("mcnemarP").asDouble();
+        assertTrue(p > 0 && p <= 1, "a p-value: " + p);
+
         JsonNode byHeadClass = attachment.get("byHeadClass");
         assertNotNull(byHeadClass, run::toString);
         assertEquals(7, byHeadClass.at("/verb/n").asInt(), byHeadClass::toString);

@@ -20,6 +20,7 @@ public final class GoldTagEvaluation {
 
     final Accuracy attachment = new Accuracy();
     final Accuracy candidateRecall = new Accuracy();
+    final PairedComparison versusCountScore = new PairedComparison();
     final CalibrationError calibration = new CalibrationError();
     final Map<String, Accuracy> comparisons = new LinkedHashMap<>();
 
@@ -32,6 +33,8 @@ public final class GoldTagEvaluation {
 
     public Accuracy attachment() { return attachment; }
     public Accuracy candidateRecall() { return candidateRecall; }
+    /** The model's choices against the count-based score's on the same examples (first: the model). */
+    public PairedComparison versusCountScore() { return versusCountScore; }
     /** Stated probability against correctness of every decision made (a missed preposition states none). */
     public CalibrationError calibration() { return calibration; }
     /** Baselines and the ceiling, by name. */

@@ -24,7 +24,9 @@ public final class GoldTagEvaluator {
             boolean right = chosen != null && gold >= 0 && chosen.best() == gold;
             result.attachment.add(right);
             if (chosen != null && chosen.best() >= 0) result.calibration.add(Math.min(1, chosen.probability(chosen.best())), right);
-            result.comparisons.get(GoldTagEvaluation.COUNT_SCORE).add(q.size() > 0 && gold >= 0 && scorer.choose(q).best() == gold);
+            boolean countRight = q.size() > 0 && gold >= 0 && scorer.choose(q).best() == gold;
+            result.comparisons.get(GoldTagEvaluation.COUNT_SCORE).add(countRight);
+            result.versusCountScore.add(right, countRight);
             int nearest = -1;
             int verb = -1;
             int noun = -1;
@@ -45,6 +47,7 @@ public final class GoldTagEvaluator {
         for (int i = 0; i < missed; i++) {
             result.attachment.add(false);
             result.candidateRecall.add(false);
+            result.versusCountScore.add(false, false);
             for (Accuracy a : result.comparisons.values()) a.add(false);
         }
         return result;
