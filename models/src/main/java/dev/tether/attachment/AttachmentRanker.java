@@ -3,7 +3,6 @@ package dev.tether.attachment;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.ranking.CandidateFeatures;
-import dev.tether.ranking.FeatureSpace;
 import dev.tether.ranking.RankerModel;
 import dev.tether.vocabulary.WordNormalizer;
 
