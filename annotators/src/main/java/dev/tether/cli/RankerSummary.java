@@ -22,8 +22,8 @@ final class RankerSummary {
         }
         AttachmentRanker r = model.attachmentRanker().get();
         RankerModel w = r.weights();
-        out.printf("attachment ranker  %,d training decisions (count features from a %d-fold jackknife), %,d features, L2 %s%n",
-                w.decisions(), ModelTrainer.JACKKNIFE_FOLDS, w.size(), w.l2());
+        out.printf("attachment ranker  %,d training decisions (count features from a %d-fold jackknife), %,d features, L2 %s,"
+                + " temperature %.3f%n", w.decisions(), ModelTrainer.JACKKNIFE_FOLDS, w.size(), w.l2(), w.temperature());
         out.println("  feature families  " + r.families().stream().map(AttachmentFeatureFamily::label).collect(Collectors.joining(", ")));
         for (RankerTrainer.Trial t : w.trials()) {
             out.printf("  cross-validated L2 %-8s log-loss %.4f  accuracy %.4f%s%n", t.l2(), t.logLoss(), t.accuracy(),

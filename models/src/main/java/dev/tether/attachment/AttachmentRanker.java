@@ -23,7 +23,7 @@ import java.util.Set;
  */
 public final class AttachmentRanker {
     /** Version of the stored ranker (its feature templates and layout); a model with another fails to load. */
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
 
     private final RankerModel weights;
     private final Set<AttachmentFeatureFamily> families;

@@ -75,6 +75,6 @@ public final class AttachmentRankerTrainer {
             }
         }
         RankerTrainer.Result r = trainer.train(data.seal(), space.size());
-        return new RankerModel(space, r.ranker(), r.l2(), r.trials(), decisions);
+        return new RankerModel(space, r.ranker(), r.l2(), r.trials(), decisions, r.temperature());
     }
 }

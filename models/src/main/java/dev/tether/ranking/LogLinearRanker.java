@@ -45,6 +45,13 @@ public final class LogLinearRanker {
 
     /** The probabilities of the candidates of decision {@code d} of {@code data}. */
     public double[] probabilities(RankingData data, int d) {
+        double[] p = scores(data, d);
+        softmax(p, p.length);
+        return p;
+    }
+
+    /** The scores {@code w · x} of the candidates of decision {@code d} of {@code data}. */
+    public double[] scores(RankingData data, int d) {
         int first = data.firstCandidate(d);
         int n = data.endCandidate(d) - first;
         double[] p = new double[n];
@@ -53,7 +60,6 @@ public final class LogLinearRanker {
             for (int e = data.firstEntry(first + c); e < data.endEntry(first + c); e++) s += weight(data.feature(e)) * data.value(e);
             p[c] = s;
         }
-        softmax(p, n);
         return p;
     }
 

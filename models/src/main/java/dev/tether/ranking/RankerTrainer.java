@@ -43,7 +43,11 @@ public final class RankerTrainer {
     }
 
     /** The trained ranker, the strength chosen and what cross-validation measured for each strength. */
-    public record Result(LogLinearRanker ranker, double l2, List<Trial> trials, int iterations) {
+    /**
+     * The trained ranker, the strength chosen, what cross-validation measured for each strength, and the temperature
+     * fitted on the held-out folds at that strength (1 without cross-validation).
+     */
+    public record Result(LogLinearRanker ranker, double l2, List<Trial> trials, int iterations, double temperature) {
     }
 
     public Result train(RankingData data, int dimension) {
@@ -52,22 +56,29 @@ public final class RankerTrainer {
         if (n == 0) throw new IllegalArgumentException("no training decisions: nothing to train the ranker on");
         List<Trial> trials = new ArrayList<>();
         double chosen = strengths[0];
+        double temperature = 1;
         if (strengths.length > 1) {
             int k = Math.min(folds, n);
             // Every (strength, fold) fit is independent and deterministic, so they may run in parallel; the
             // held-out sums are then added in a fixed order.
             double[][][] heldOut = new double[strengths.length][k][];
+            LogLinearRanker[][] foldRankers = new LogLinearRanker[strengths.length][k];
             java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads);
             try {
-                List<java.util.concurrent.Future<double[][]>> futures = new ArrayList<>();
+                List<java.util.concurrent.Future<LogLinearRanker[]>> futures = new ArrayList<>();
                 for (int f = 0; f < k; f++) {
                     int from = (int) ((long) n * f / k);
                     int to = (int) ((long) n * (f + 1) / k);
                     futures.add(pool.submit(() -> foldPath(data, from, to, n, dimension)));
                 }
                 for (int f = 0; f < k; f++) {
-                    double[][] path = futures.get(f).get();
-                    for (int s = 0; s < strengths.length; s++) heldOut[s][f] = path[s];
+                    LogLinearRanker[] path = futures.get(f).get();
+                    int from = (int) ((long) n * f / k);
+                    int to = (int) ((long) n * (f + 1) / k);
+                    for (int s = 0; s < strengths.length; s++) {
+                        foldRankers[s][f] = path[s];
+                        heldOut[s][f] = heldOut(data, path[s], from, to);
+                    }
                 }
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
@@ -78,6 +89,7 @@ public final class RankerTrainer {
                 pool.shutdownNow();
             }
             double bestLoss = Double.POSITIVE_INFINITY;
+            int chosenIndex = 0;
             for (int s = 0; s < strengths.length; s++) {
                 double loss = 0;
                 double right = 0;
@@ -91,11 +103,13 @@ public final class RankerTrainer {
                 if (loss < bestLoss) {
                     bestLoss = loss;
                     chosen = strengths[s];
+                    chosenIndex = s;
                 }
             }
+            temperature = fitTemperature(data, foldRankers[chosenIndex], k);
         }
         Fit all = fit(data, range(0, 0, n), chosen, dimension);
-        return new Result(all.ranker, chosen, trials, all.iterations);
+        return new Result(all.ranker, chosen, trials, all.iterations, temperature);
     }
 
     private record Fit(LogLinearRanker ranker, int iterations) {
@@ -115,19 +129,79 @@ public final class RankerTrainer {
      * The held-out figures of every strength for one fold, fitted from the strongest penalty to the weakest, each
      * starting from the previous solution (a regularization path: fewer iterations, same order every run).
      */
-    private double[][] foldPath(RankingData data, int from, int to, int n, int dimension) {
+    private LogLinearRanker[] foldPath(RankingData data, int from, int to, int n, int dimension) {
         int[] training = range(from, to, n);
         Integer[] order = new Integer[strengths.length];
         for (int s = 0; s < order.length; s++) order[s] = s;
         Arrays.sort(order, (x, y) -> Double.compare(strengths[y], strengths[x]));
-        double[][] out = new double[strengths.length][];
+        LogLinearRanker[] out = new LogLinearRanker[strengths.length];
         double[] start = new double[dimension];
         for (int s : order) {
-            LogLinearRanker r = fit(data, training, strengths[s], start).ranker;
-            out[s] = heldOut(data, r, from, to);
-            start = r.weightsCopy();
+            out[s] = fit(data, training, strengths[s], start).ranker;
+            start = out[s].weightsCopy();
         }
         return out;
+    }
+
+    /**
+     * Temperature scaling (Guo et al. 2017) fitted on held-out folds: the {@code T} that maximizes the likelihood of
+     * every decision's gold candidate under {@code softmax(s / T)}, where {@code s} are the decision's scores from the
+     * ranker that did not see its fold. The likelihood is concave in {@code 1/T}, so a golden-section search finds it.
+     */
+    private static double fitTemperature(RankingData data, LogLinearRanker[] foldRankers, int k) {
+        int n = data.decisions();
+        double[][] scores = new double[n][];
+        int[] gold = new int[n];
+        double[] weights = new double[n];
+        for (int f = 0; f < k; f++) {
+            int from = (int) ((long) n * f / k);
+            int to = (int) ((long) n * (f + 1) / k);
+            for (int d = from; d < to; d++) {
+                scores[d] = foldRankers[f].scores(data, d);
+                gold[d] = data.gold(d);
+                weights[d] = data.weight(d);
+            }
+        }
+        return 1 / fitInverseTemperature(scores, gold, weights);
+    }
+
+    /** The {@code β = 1/T} in [1/8, 8] that minimizes {@code Σ c_d · (log Σ_i exp(β s_di) − β s_d,gold)}. */
+    static double fitInverseTemperature(double[][] scores, int[] gold, double[] weights) {
+        double lo = 0.125;
+        double hi = 8;
+        double ratio = (Math.sqrt(5) - 1) / 2;
+        double a = hi - ratio * (hi - lo);
+        double b = lo + ratio * (hi - lo);
+        double fa = scaledLoss(scores, gold, weights, a);
+        double fb = scaledLoss(scores, gold, weights, b);
+        for (int i = 0; i < 80; i++) {
+            if (fa <= fb) {
+                hi = b;
+                b = a;
+                fb = fa;
+                a = hi - ratio * (hi - lo);
+                fa = scaledLoss(scores, gold, weights, a);
+            } else {
+                lo = a;
+                a = b;
+                fa = fb;
+                b = lo + ratio * (hi - lo);
+                fb = scaledLoss(scores, gold, weights, b);
+            }
+        }
+        return (lo + hi) / 2;
+    }
+
+    private static double scaledLoss(double[][] scores, int[] gold, double[] weights, double beta) {
+        double loss = 0;
+        for (int d = 0; d < scores.length; d++) {
+            double max = Double.NEGATIVE_INFINITY;
+            for (double s : scores[d]) max = Math.max(max, beta * s);
+            double sum = 0;
+            for (double s : scores[d]) sum += Math.exp(beta * s - max);
+            loss += weights[d] * (max + Math.log(sum) - beta * scores[d][gold[d]]);
+        }
+        return loss;
     }
 
     /** Decisions {@code 0..n-1} without {@code [from, to)}. */

@@ -88,6 +88,31 @@ class RankerTrainerTest {
     }
 
     @Test
+    void temperatureScalingFindsTheWorkedOptimum() {
+        // Worked example: two candidates whose scores differ by 2, the higher one gold in 8 decisions of 10. Under
+        // softmax(beta * s) the likelihood is largest where sigmoid(2 beta) = 0.8, that is beta = ln(4) / 2.
+        double[][] scores = new double[10][];
+        int[] gold = new int[10];
+        double[] weights = new double[10];
+        for (int d = 0; d < 10; d++) {
+            scores[d] = new double[] {2, 0};
+            gold[d] = d < 8 ? 0 : 1;
+            weights[d] = 1;
+        }
+        // A flat optimum: the loss pins beta down to about the square root of the rounding error.
+        assertEquals(Math.log(4) / 2, RankerTrainer.fitInverseTemperature(scores, gold, weights), 1e-6);
+    }
+
+    @Test
+    void crossValidationFitsATemperatureOnTheHeldOutFolds() {
+        RankingData data = RankerObjectiveTest.randomData(31, 200, 8);
+        RankerTrainer.Result r = new RankerTrainer(new double[] {0.1, 1}, 4, new Lbfgs(300, 1e-9)).train(data, 8);
+        assertTrue(r.temperature() > 0.125 && r.temperature() < 8, "temperature " + r.temperature());
+        assertEquals(1.0, new RankerTrainer(new double[] {1}, 1, new Lbfgs(300, 1e-9)).train(data, 8).temperature(), 0.0,
+                "no held-out folds, no temperature");
+    }
+
+    @Test
     void badInputIsRefused() {
         RankingData empty = new RankingData();
         assertThrows(IllegalArgumentException.class, () -> new RankerTrainer().train(empty, 3));
