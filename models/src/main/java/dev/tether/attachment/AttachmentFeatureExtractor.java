@@ -9,7 +9,6 @@ import dev.tether.counts.TupleCounts;
 import dev.tether.counts.TupleKey;
 import dev.tether.ranking.CandidateFeatures;
 import dev.tether.vocabulary.PennTags;
-import dev.tether.vocabulary.Vocabulary;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.util.EnumSet;
@@ -61,15 +60,15 @@ public final class AttachmentFeatureExtractor {
      * (today's scorer) on the same statistics, for the evidence and as a baseline.
      */
     public HeadChoice extract(AttachmentQuery q, CandidateFeatures out) {
+        // The count-based score reads the same count entries the features need; it hands them over, so that each
+        // table is probed once per candidate.
         double[][] factors = new double[q.size()][3];
-        HeadChoice base = countScorer.choose(q, factors);
+        long[][] entries = new long[q.size()][HeadChoiceScorer.STRUCTURE_ENTRY + 1];
+        HeadChoice base = countScorer.choose(q, factors, entries);
         out.reset();
         int n = q.size();
         String prepositionKey = normalizer.preposition(q.preposition());
         String objectKey = normalizer.noun(q.object());
-        Vocabulary words = statistics.words();
-        int p = statistics.prepositions().id(prepositionKey);
-        int o = words.id(objectKey);
         int lp = lexicon.prepositions().id(prepositionKey);
         int lo = lexicon.words().id(objectKey);
         int objectKind = objectKind(q.objectTag());
@@ -102,9 +101,8 @@ public final class AttachmentFeatureExtractor {
                 out.add(AttachmentFeature.COUNT_LEVEL.key(base.evidence(i).ordinal(), 0, c), 1);
             }
             if (on(AttachmentFeatureFamily.BACKED_OFF)) {
-                int h = words.id(headKey);
                 for (Part part : PARTS) {
-                    long entry = lookup(part, p, h, c, o);
+                    long entry = entries[i][part.ordinal()];
                     if (entry == TupleCounts.ABSENT) {
                         out.add(AttachmentFeature.LEVEL_UNSEEN.key(part.ordinal(), 0, c), 1);
                     } else {
@@ -114,7 +112,7 @@ public final class AttachmentFeatureExtractor {
                         out.add(AttachmentFeature.LEVEL_TRIALS.key(part.ordinal(), 0, c), Math.log1p(trials));
                     }
                 }
-                long se = statistics.structure().find(structure[i]);
+                long se = entries[i][HeadChoiceScorer.STRUCTURE_ENTRY];
                 if (se != TupleCounts.ABSENT) {
                     double hits = TupleCounts.hitsIn(se);
                     double trials = TupleCounts.trialsIn(se);
@@ -185,17 +183,6 @@ public final class AttachmentFeatureExtractor {
 
     private boolean on(AttachmentFeatureFamily f) {
         return on[f.ordinal()];
-    }
-
-    private long lookup(Part part, int p, int h, int c, int o) {
-        if (p <= 0) return TupleCounts.ABSENT;
-        TupleCounts t = statistics.lexical(p, part);
-        switch (part) {
-            case HEAD_OBJECT: return h > 0 && o > 0 ? t.find(TupleKey.of(h, c + 1, o)) : TupleCounts.ABSENT;
-            case HEAD: return h > 0 ? t.find(TupleKey.of(h, c + 1)) : TupleCounts.ABSENT;
-            case CLASS_OBJECT: return o > 0 ? t.find(TupleKey.of(c + 1, o)) : TupleCounts.ABSENT;
-            default: return t.find(TupleKey.of(c + 1));
-        }
     }
 
     private int lightVerb(String verbKey) {

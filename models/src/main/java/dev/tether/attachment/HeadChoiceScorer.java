@@ -68,14 +68,19 @@ public final class HeadChoiceScorer {
     }
 
     public HeadChoice choose(AttachmentQuery q) {
-        return choose(q, null);
+        return choose(q, null, null);
     }
+
+    /** Index of the structural entry in a row of {@link #choose(AttachmentQuery, double[][], long[][])}'s entries. */
+    static final int STRUCTURE_ENTRY = Part.values().length;
 
     /**
      * As {@link #choose(AttachmentQuery)}; when {@code factors} is given (one row of three per candidate), it receives
-     * each candidate's structural rate S, class factor (Pc/Rc) and word factor (Pw/Pc).
+     * each candidate's structural rate S, class factor (Pc/Rc) and word factor (Pw/Pc), and when {@code entries} is
+     * given (one row of {@code STRUCTURE_ENTRY + 1} per candidate), the count entries it read for the candidate: one per
+     * lexical {@link Part} (by ordinal) and the structural one last, {@link TupleCounts#ABSENT} where there was none.
      */
-    HeadChoice choose(AttachmentQuery q, double[][] factors) {
+    HeadChoice choose(AttachmentQuery q, double[][] factors, long[][] entries) {
         int n = q.size();
         Vocabulary words = counts.words();
         int p = counts.prepositions().id(normalizer.preposition(q.preposition()));
@@ -91,6 +96,10 @@ public final class HeadChoiceScorer {
             HeadClass hc = q.headClass(i);
             int c = hc.ordinal();
             long se = structure.find(structureKeys[i]);
+            long ce = TupleCounts.ABSENT;
+            long he = TupleCounts.ABSENT;
+            long coe = TupleCounts.ABSENT;
+            long hoe = TupleCounts.ABSENT;
             double s = se != TupleCounts.ABSENT
                     ? (TupleCounts.hitsIn(se) + SMOOTHING * PRIOR) / (TupleCounts.trialsIn(se) + SMOOTHING) : PRIOR / 4;
             double pc = classRate[c];
@@ -99,7 +108,7 @@ public final class HeadChoiceScorer {
             double eh = 0;
             double et = 0;
             if (p > 0) {
-                long ce = counts.lexical(p, Part.CLASS).find(TupleKey.of(c + 1));
+                ce = counts.lexical(p, Part.CLASS).find(TupleKey.of(c + 1));
                 if (ce != TupleCounts.ABSENT) {
                     eh = TupleCounts.hitsIn(ce);
                     et = TupleCounts.trialsIn(ce);
@@ -110,8 +119,8 @@ public final class HeadChoiceScorer {
                 int h = words.id(headKey(normalizer, q.head(i), hc));
                 double midHits = 0;
                 double midTrials = 0;
-                long he = h > 0 ? counts.lexical(p, Part.HEAD).find(TupleKey.of(h, c + 1)) : TupleCounts.ABSENT;
-                long coe = o > 0 ? counts.lexical(p, Part.CLASS_OBJECT).find(TupleKey.of(c + 1, o)) : TupleCounts.ABSENT;
+                if (h > 0) he = counts.lexical(p, Part.HEAD).find(TupleKey.of(h, c + 1));
+                if (o > 0) coe = counts.lexical(p, Part.CLASS_OBJECT).find(TupleKey.of(c + 1, o));
                 if (coe != TupleCounts.ABSENT) {
                     midHits += TupleCounts.hitsIn(coe);
                     midTrials += TupleCounts.trialsIn(coe);
@@ -127,7 +136,7 @@ public final class HeadChoiceScorer {
                     eh = midHits;
                     et = midTrials;
                 }
-                long hoe = h > 0 && o > 0 ? counts.lexical(p, Part.HEAD_OBJECT).find(TupleKey.of(h, c + 1, o)) : TupleCounts.ABSENT;
+                if (h > 0 && o > 0) hoe = counts.lexical(p, Part.HEAD_OBJECT).find(TupleKey.of(h, c + 1, o));
                 if (hoe != TupleCounts.ABSENT) {
                     eh = TupleCounts.hitsIn(hoe);
                     et = TupleCounts.trialsIn(hoe);
@@ -140,6 +149,13 @@ public final class HeadChoiceScorer {
                 factors[i][0] = s;
                 factors[i][1] = pc / classRate[c];
                 factors[i][2] = pw / pc;
+            }
+            if (entries != null) {
+                entries[i][Part.HEAD_OBJECT.ordinal()] = hoe;
+                entries[i][Part.HEAD.ordinal()] = he;
+                entries[i][Part.CLASS_OBJECT.ordinal()] = coe;
+                entries[i][Part.CLASS.ordinal()] = ce;
+                entries[i][STRUCTURE_ENTRY] = se;
             }
             sum += score[i];
             evidence[i] = ev;
