@@ -1,5 +1,6 @@
 package dev.tether.audit;
 
+import dev.tether.output.AtomicFile;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -54,7 +55,7 @@ public final class AuditReportWriter {
             try {
                 Path xmi = run.folder().resolve(d.doc() + ".xmi");
                 String page = DocumentPage.render(d, texts.read(xmi), reviewed.getOrDefault(d.doc(), Map.of()));
-                ReportFiles.write(out.resolve(PAGES).resolve(name), page);
+                AtomicFile.writeString(out.resolve(PAGES).resolve(name), page);
                 written.add(name);
                 pageNames.add(name);
             } catch (IOException e) {
@@ -68,7 +69,7 @@ public final class AuditReportWriter {
                 if (f.endsWith(".html") && !written.contains(f)) Files.delete(p);
             }
         }
-        ReportFiles.write(out.resolve(INDEX), index(run, summary, pageNames, failed));
+        AtomicFile.writeString(out.resolve(INDEX), index(run, summary, pageNames, failed));
         return new Written(written.size(), failed);
     }
 

@@ -1,5 +1,6 @@
 package dev.tether.audit;
 
+import dev.tether.output.AtomicFile;
 import dev.tether.evaluation.CalibrationError;
 
 import java.io.IOException;
@@ -47,7 +48,7 @@ public final class CalibrationPage {
                 .append("preposition got no decision states no probability and is not counted here; it counts as wrong in the accuracy.</p>\n");
         Html.pageEnd(out);
         Path file = dir.resolve(FILE);
-        ReportFiles.write(file, out.toString());
+        AtomicFile.writeString(file, out.toString());
         return file;
     }
 }

@@ -3,7 +3,7 @@ package dev.tether.cli;
 import dev.tether.audit.AuditReportWriter;
 import dev.tether.audit.AuditedRun;
 import dev.tether.audit.LedgerReader;
-import dev.tether.audit.ReportFiles;
+import dev.tether.output.AtomicFile;
 import dev.tether.audit.ReviewMark;
 import dev.tether.audit.ReviewSheet;
 import dev.tether.audit.ReviewSheetReader;
@@ -72,7 +72,7 @@ final class AuditCommand implements Command {
         AuditReportWriter writer = new AuditReportWriter(marks);
         Files.createDirectories(target);
         if (queue > 0) {
-            ReportFiles.write(target.resolve(ReviewSheet.FILE), ReviewSheet.write(run, queue));
+            AtomicFile.writeString(target.resolve(ReviewSheet.FILE), ReviewSheet.write(run, queue));
             writer.withReviewSheet(ReviewSheet.FILE);
         }
         AuditReportWriter.Written written = writer.write(run, target);

@@ -89,6 +89,15 @@ public final class AtomicFile {
         }
     }
 
+    /**
+     * Writes {@code text} as UTF-8 to {@code target} completely or not at all, not forced to disk (for files a re-run
+     * writes again, such as report pages).
+     */
+    public static void writeString(Path target, String text) throws IOException {
+        writeTemporary(target, out -> out.write(text.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        commit(target);
+    }
+
     /** Writes {@code target} completely or not at all, forced to disk before the rename. */
     public static void write(Path target, Content content) throws IOException {
         writeTemporary(target, content, true);
