@@ -1,5 +1,7 @@
 package dev.tether.cli;
 
+import dev.tether.pipeline.DocumentFiles;
+
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.tether.candidates.HeadClass;
@@ -158,6 +160,10 @@ final class ThesaurusCommand implements Command {
             out.printf("  %-16s %,d%n", e.getKey().label(), e.getValue().size());
             for (String f : e.getValue().subList(0, Math.min(5, e.getValue().size()))) out.println("    " + f);
             if (e.getValue().size() > 5) out.printf("    ... and %,d more%n", e.getValue().size() - 5);
+        }
+        if (counted.notDocuments() > 0) {
+            out.printf("not read %,d entries below the inputs that are not %s documents (other endings, hidden files, links)%n",
+                    counted.notDocuments(), DocumentFiles.EXTENSION);
         }
         out.printf("words    %,d nouns, %,d verbs, %,d adjectives with at least %d tokens%n", thesaurus.size(HeadClass.NOUN),
                 thesaurus.size(HeadClass.VERB), thesaurus.size(HeadClass.ADJECTIVE), settings.minFrequency());

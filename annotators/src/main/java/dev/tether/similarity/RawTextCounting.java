@@ -46,8 +46,12 @@ public final class RawTextCounting {
         }
     }
 
-    /** What was counted: documents, skipped documents by reason (with their files), sentences and tokens. */
-    public record Summary(int documents, Map<Skip, List<String>> skipped, long sentences, long tokens, double seconds) {
+    /**
+     * What was counted: documents, skipped documents by reason (with their files), entries below the inputs that are
+     * not documents ({@link DocumentFiles}: other endings, hidden files, links), sentences and tokens.
+     */
+    public record Summary(int documents, Map<Skip, List<String>> skipped, long notDocuments, long sentences, long tokens,
+                          double seconds) {
         public int skippedCount() {
             int n = 0;
             for (List<String> files : skipped.values()) n += files.size();
@@ -76,7 +80,12 @@ public final class RawTextCounting {
     public Summary count(List<Path> inputs, SentenceSink sink) throws IOException {
         long start = System.nanoTime();
         List<Path> files = new ArrayList<>();
-        for (Path p : inputs) files.addAll(DocumentFiles.list(p).documents());
+        long notDocuments = 0;
+        for (Path p : inputs) {
+            DocumentFiles.Listing listing = DocumentFiles.list(p);
+            files.addAll(listing.documents());
+            notDocuments += listing.skippedTotal();
+        }
         Map<Skip, List<String>> skipped = new LinkedHashMap<>();
         int counted = 0;
         long sentences = 0, tokens = 0;
@@ -119,7 +128,7 @@ public final class RawTextCounting {
             pool.shutdownNow();
             for (RawTextTagger t : taggers) t.close();
         }
-        return new Summary(counted, skipped, sentences, tokens, (System.nanoTime() - start) / 1e9);
+        return new Summary(counted, skipped, notDocuments, sentences, tokens, (System.nanoTime() - start) / 1e9);
     }
 
     private static Document take(Future<Document> f) throws IOException {

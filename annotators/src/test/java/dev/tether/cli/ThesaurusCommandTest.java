@@ -45,6 +45,7 @@ class ThesaurusCommandTest {
         Files.writeString(logs.resolve("log-2-empty.txt"), "  \n");
         Files.write(logs.resolve("log-3-binary.txt"), new byte[] {'E', 'n', 0, 1, 2});
         Files.write(logs.resolve("log-4-latin1.txt"), "Le m\u00e9canicien a remplac\u00e9 le joint.\n".getBytes(StandardCharsets.ISO_8859_1));
+        Files.writeString(logs.resolve("crew-notes.md"), "Not a log.\n");
         thesaurus = dir.resolve("ferry.thesaurus");
         build = CommandLineRun.of("thesaurus", "build", "--raw", logs.toString(), "--out", thesaurus.toString(),
                 "--min-frequency", "3", "--neighbours", "5", "--threads", "2");
@@ -59,6 +60,8 @@ class ThesaurusCommandTest {
         assertTrue(build.out().contains("  binary           1"), build.out());
         assertTrue(build.out().contains("  not valid UTF-8  1"), build.out());
         assertTrue(build.out().contains("log-4-latin1.txt:1: is not valid UTF-8 text"), build.out());
+        assertTrue(build.out().contains("not read 1 entries below the inputs that are not .txt documents"),
+                "a file of another ending is counted, not dropped silently: " + build.out());
         assertTrue(Files.exists(thesaurus));
     }
 
