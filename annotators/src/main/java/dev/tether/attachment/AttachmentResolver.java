@@ -60,7 +60,6 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
     private ModelHolder sharedModel;
 
     private TetherModel model;
-    private boolean countsOnly;
     /** The ranker in use, or null when the count-based score chooses. */
     private AttachmentRanker ranker;
     /** Features of the decision at hand, reused for its evidence (one buffer per engine instance). */
@@ -80,7 +79,7 @@ public class AttachmentResolver extends JCasAnnotator_ImplBase {
             throw new ResourceInitializationException(new IllegalArgumentException(
                     "parameter " + PARAM_SCORER + " must be 'auto' or 'counts', got '" + scorerName + "'"));
         }
-        countsOnly = scorerName.equals("counts");
+        boolean countsOnly = scorerName.equals("counts");
         try {
             model = sharedModel != null ? sharedModel.model() : LoadedModels.get(modelLocation);
         } catch (IOException e) {
