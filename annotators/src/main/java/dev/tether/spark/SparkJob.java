@@ -53,7 +53,7 @@ public final class SparkJob implements AutoCloseable {
     public static SparkJob start(SparkMaster master, String appName) throws IOException {
         JavaSparkContext borrowed = lent;
         if (borrowed != null && !borrowed.sc().isStopped()) {
-            if (!borrowed.master().equals(master.url())) {
+            if (!borrowed.master().equals(master.url()) && !borrowed.master().equals(master.given())) {
                 throw new IOException("this process already runs on the Spark master " + borrowed.master() + "; --spark says "
                         + master.url());
             }

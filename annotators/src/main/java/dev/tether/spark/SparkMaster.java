@@ -20,7 +20,7 @@ import java.util.regex.Pattern;
  *   <li>{@code yarn}, {@code k8s://...}: handed to Spark as given (normally through {@code spark-submit}).</li>
  * </ul>
  */
-public record SparkMaster(String url, boolean local) {
+public record SparkMaster(String given, String url, boolean local) {
     /** Tries of a task in the embedded mode (Spark's default {@code spark.task.maxFailures} on a cluster). */
     public static final int LOCAL_TASK_TRIES = 4;
     static final int CONNECT_MILLIS = 5_000;
@@ -34,13 +34,13 @@ public record SparkMaster(String url, boolean local) {
         if (m.matches()) {
             String slots = m.group(1) == null ? "1" : m.group(1);
             String tries = m.group(2) == null ? String.valueOf(LOCAL_TASK_TRIES) : m.group(2);
-            return new SparkMaster("local[" + slots + "," + tries + "]", true);
+            return new SparkMaster(value, "local[" + slots + "," + tries + "]", true);
         }
         if (STANDALONE.matcher(value).matches()) {
             addresses(value); // fails on a malformed address
-            return new SparkMaster(value, false);
+            return new SparkMaster(value, value, false);
         }
-        if (value.equals("yarn") || value.startsWith("k8s://")) return new SparkMaster(value, false);
+        if (value.equals("yarn") || value.startsWith("k8s://")) return new SparkMaster(value, value, false);
         throw new IllegalArgumentException("'" + value + "' is not a Spark master; give local[N] (embedded, N task slots),"
                 + " spark://host:port (a standalone cluster), yarn or k8s://...");
     }
