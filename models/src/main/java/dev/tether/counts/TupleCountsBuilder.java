@@ -30,6 +30,17 @@ public final class TupleCountsBuilder {
         for (int i = 0; i < other.size(); i++) add(keyMap.applyAsLong(other.key(i)), other.hitsAt(i), other.trialsAt(i));
     }
 
+    /** Adds every entry of {@code other} times {@code scale}, keys rewritten by {@code keyMap}. */
+    public void addAll(TupleCounts other, LongUnaryOperator keyMap, double scale) {
+        if (scale == 1.0) {
+            addAll(other, keyMap);
+            return;
+        }
+        for (int i = 0; i < other.size(); i++) {
+            add(keyMap.applyAsLong(other.key(i)), other.hitsAt(i) * scale, other.trialsAt(i) * scale);
+        }
+    }
+
     public int size() {
         return size;
     }

@@ -38,6 +38,7 @@ import java.util.zip.InflaterInputStream;
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
  * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
+ * {@code source-weights} (how much each source's events count, when some weight is not 1),
  * {@code attachment-ranker} (its own version, feature families, feature keys and weights) and {@code tagger} (a
  * part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
@@ -52,6 +53,8 @@ public final class ModelFile {
     private static final String HEAD_CHOICE = "head-choice";
     private static final String ATTACHMENT_RANKER = "attachment-ranker";
     private static final String TAGGER = "tagger";
+    /** Optional: each source's weight, in source order; written only when some weight is not 1. */
+    private static final String SOURCE_WEIGHTS = "source-weights";
 
     private ModelFile() {
     }
@@ -102,6 +105,14 @@ public final class ModelFile {
                 out.writeUTF(s.sha256());
             }
         }));
+        boolean weighted = false;
+        for (ModelSource s : sources) weighted |= s.weight() != 1.0;
+        if (weighted) {
+            sections.put(SOURCE_WEIGHTS, section(out -> {
+                out.writeInt(sources.size());
+                for (ModelSource s : sources) out.writeDouble(s.weight());
+            }));
+        }
         sections.put(QUADRUPLES, section(quadruples::write));
         sections.put(HEAD_CHOICE, section(headChoice::write));
         if (ranker != null) {
@@ -145,6 +156,15 @@ public final class ModelFile {
             List<ModelSource> sources = new ArrayList<>();
             for (int i = 0; i < n; i++) {
                 sources.add(new ModelSource(in.readUTF(), in.readUTF(), in.readLong(), in.readLong(), in.readUTF()));
+            }
+            byte[] weights = sections.get(SOURCE_WEIGHTS);
+            if (weights != null) {
+                DataInputStream w = new DataInputStream(new ByteArrayInputStream(weights));
+                if (w.readInt() != sources.size()) throw new IOException("source weights do not match the sources");
+                for (int i = 0; i < sources.size(); i++) {
+                    ModelSource s = sources.get(i);
+                    sources.set(i, new ModelSource(s.name(), s.kind(), s.items(), s.skipped(), s.sha256(), w.readDouble()));
+                }
             }
             QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
             HeadChoiceCounts headChoice = HeadChoiceCounts.read(new DataInputStream(new ByteArrayInputStream(heads)));

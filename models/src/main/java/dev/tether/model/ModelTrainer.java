@@ -1,5 +1,6 @@
 package dev.tether.model;
 
+import dev.tether.attachment.AmbiguousReestimation;
 import dev.tether.attachment.AttachmentExample;
 import dev.tether.attachment.AttachmentFeatureExtractor;
 import dev.tether.attachment.AttachmentFeatureFamily;
@@ -17,6 +18,7 @@ import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.counts.QuadrupleCountsBuilder;
+import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.ranking.RankerModel;
 import dev.tether.ranking.RankerTrainer;
@@ -55,6 +57,8 @@ public final class ModelTrainer {
     private final List<TetherModel> baseModels = new ArrayList<>();
     private final List<LabelledQuadruple> fixedQuadruples = new ArrayList<>();
     private final List<AttachmentExample> examples = new ArrayList<>();
+    private final List<AmbiguousReestimation.Estimate> rawEstimates = new ArrayList<>();
+    private final List<Double> rawWeights = new ArrayList<>();
     private final List<LabelledQuadruple> exampleQuadruples = new ArrayList<>();
     private Set<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
     private RankerTrainer rankerTrainer = new RankerTrainer();
@@ -148,6 +152,27 @@ public final class ModelTrainer {
     }
 
     /**
+     * Adds what unlabelled text taught ({@link RawAttachmentCounts}, merged from any number of documents or shards):
+     * the unambiguous attachments and the co-occurrence counts, and after {@code rounds} rounds of re-estimation
+     * ({@link AmbiguousReestimation}) the ambiguous configurations; every count times {@code weight}, how much one
+     * raw event counts against one labelled one (chosen on development data, see {@code RawWeightChoice}). Recorded
+     * as a source of kind {@code raw} with its weight; {@code sha256} identifies the counts.
+     */
+    public ModelTrainer addRawCounts(RawAttachmentCounts raw, String name, double weight, int rounds) {
+        if (!(weight > 0) || Double.isInfinite(weight)) {
+            throw new IllegalArgumentException("the weight of raw counts must be a positive number, was " + weight);
+        }
+        AmbiguousReestimation.Estimate estimate = AmbiguousReestimation.of(raw, rounds);
+        quadruples.addAll(estimate.quadruples(), weight);
+        headChoice.addAll(estimate.headChoice(), weight);
+        rawEstimates.add(estimate);
+        rawWeights.add(weight);
+        sources.add(new ModelSource(name, "raw", raw.tally().prepositions(), raw.tally().skippedDocuments(),
+                dev.tether.io.Sha256.hex(raw.toBytes()), weight));
+        return this;
+    }
+
+    /**
      * Counts the training events read off a treebank: every head-choice example, and every classic quadruple among
      * them. {@code name} and {@code sha256} identify the file in the model's list of sources.
      */
@@ -234,6 +259,10 @@ public final class ModelTrainer {
             for (TetherModel base : baseModels) {
                 q4.addAll(base.quadruples());
                 hc.addAll(base.headChoice());
+            }
+            for (int r = 0; r < rawEstimates.size(); r++) {
+                q4.addAll(rawEstimates.get(r).quadruples(), rawWeights.get(r));
+                hc.addAll(rawEstimates.get(r).headChoice(), rawWeights.get(r));
             }
             for (LabelledQuadruple q : fixedQuadruples) countQuadruple(q, q4, hc);
             for (int j = 0; j < n; j++) if (fold[j] != f) countExample(examples.get(j), hc);
