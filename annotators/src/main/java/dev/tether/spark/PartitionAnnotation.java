@@ -26,7 +26,7 @@ import java.util.List;
  * what the next attempt writes again, so a retried task leaves no partial output. A document that fails fails alone:
  * its outcome carries the reason.
  */
-final class PartitionAnnotation implements FlatMapFunction<Iterator<DocumentTask>, DocumentOutcome> {
+final class PartitionAnnotation implements FlatMapFunction<Iterator<ArrayList<DocumentTask>>, DocumentOutcome> {
     /** Called before a document's files are committed; lets a test fail an attempt between writing and renaming. */
     @FunctionalInterface
     interface BeforeCommit extends Serializable {
@@ -50,12 +50,12 @@ final class PartitionAnnotation implements FlatMapFunction<Iterator<DocumentTask
     }
 
     @Override
-    public Iterator<DocumentOutcome> call(Iterator<DocumentTask> documents) throws Exception {
+    public Iterator<DocumentOutcome> call(Iterator<ArrayList<DocumentTask>> partition) throws Exception {
         TaskContext task = TaskContext.get();
         String attempt = "attempt-" + task.taskAttemptId();
         Path folder = Path.of(out);
         List<DocumentTask> tasks = new ArrayList<>();
-        documents.forEachRemaining(tasks::add);
+        partition.forEachRemaining(tasks::addAll);
         TaskFailureListener cleanUp = (context, error) -> deleteTemporaries(folder, tasks, attempt);
         task.addTaskFailureListener(cleanUp);
 

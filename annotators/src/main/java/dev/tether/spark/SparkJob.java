@@ -1,6 +1,11 @@
 package dev.tether.spark;
 
+import dev.tether.counts.RawAttachmentCountsBuilder;
+import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.pipeline.CollectionRun;
+import dev.tether.pipeline.DocumentFiles;
+import dev.tether.pipeline.DocumentTask;
+import dev.tether.similarity.RawTextCounting;
 import dev.tether.pipeline.DocumentOutcome;
 import org.apache.spark.SparkConf;
 import org.apache.spark.api.java.JavaFutureAction;
@@ -10,6 +15,9 @@ import java.io.File;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.Map;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -28,6 +36,8 @@ public final class SparkJob implements AutoCloseable {
     public static final int STARTUP_DEADLINE_SECONDS = 120;
     /** Partitions per task slot: small enough partitions that slots finish together and a retry redoes little. */
     static final int PARTITIONS_PER_SLOT = 4;
+    /** Levels of Spark's tree aggregation of count shards (Spark's default). */
+    static final int AGGREGATION_DEPTH = 2;
 
     private static volatile JavaSparkContext lent;
 
@@ -120,10 +130,11 @@ public final class SparkJob implements AutoCloseable {
     CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, Path out,
                                        PartitionAnnotation.BeforeCommit beforeCommit) {
         return (tasks, fingerprint) -> {
-            int partitions = Math.max(1, Math.min(tasks.size(), PARTITIONS_PER_SLOT * parallelism()));
+            List<ArrayList<DocumentTask>> parts = BalancedPartitions.of(tasks, PARTITIONS_PER_SLOT * parallelism(),
+                    t -> new File(t.file()).length());
             PartitionAnnotation work = new PartitionAnnotation(model, modelId, chunks, out, fingerprint, beforeCommit);
             try {
-                List<DocumentOutcome> outcomes = context.parallelize(tasks, partitions).mapPartitions(work).collect();
+                List<DocumentOutcome> outcomes = context.parallelize(parts, parts.size()).mapPartitions(work).collect();
                 return outcomes;
             } catch (RuntimeException e) {
                 throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
@@ -131,6 +142,45 @@ public final class SparkJob implements AutoCloseable {
                 if (master.local()) ExecutorPipelines.closeAll();
             }
         };
+    }
+
+    /**
+     * Counts the raw text below {@code inputs} for {@code train --raw} as {@link RawTextAttachmentCounting#count} does
+     * on threads, with the same result: each partition's documents are counted into one shard of Tether's mergeable
+     * count tables, and the shards are combined by Spark's tree aggregation (results of completed tasks only).
+     */
+    public RawTextAttachmentCounting.Summary countRawText(List<Path> inputs) throws IOException {
+        return countRawText(inputs, null);
+    }
+
+    RawTextAttachmentCounting.Summary countRawText(List<Path> inputs, PartitionCounting.AfterDocument afterDocument)
+            throws IOException {
+        long start = System.nanoTime();
+        List<String> files = new ArrayList<>();
+        long notDocuments = 0;
+        for (Path p : inputs) {
+            DocumentFiles.Listing listing = DocumentFiles.list(p);
+            for (Path d : listing.documents()) files.add(d.toString());
+            notDocuments += listing.skippedTotal();
+        }
+        List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
+        CountShard all;
+        try {
+            all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(afterDocument))
+                    .treeAggregate(new CountShard(), CountShard::merge, CountShard::merge, AGGREGATION_DEPTH);
+        } catch (RuntimeException e) {
+            throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
+        } finally {
+            if (master.local()) PartitionCounting.closeAll();
+        }
+        RawAttachmentCountsBuilder counts = all.counts();
+        Map<RawTextCounting.Skip, List<String>> skipped = new EnumMap<>(RawTextCounting.Skip.class);
+        for (String[] s : all.skipped()) {
+            skipped.computeIfAbsent(RawTextCounting.Skip.valueOf(s[0]), k -> new ArrayList<>()).add(s[1]);
+            counts.addSkippedDocument();
+        }
+        for (List<String> reasons : skipped.values()) Collections.sort(reasons);
+        return new RawTextAttachmentCounting.Summary(counts.build(), skipped, notDocuments, (System.nanoTime() - start) / 1e9);
     }
 
     /** Stops the context this job started (not a lent one). */

@@ -1,5 +1,6 @@
 package dev.tether.spark;
 
+import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.io.Sha256;
 import dev.tether.model.LoadedModels;
 import dev.tether.output.AtomicFile;
@@ -24,18 +25,20 @@ import java.util.TreeMap;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.Stream;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * The Spark job below the command line (issue 11): a task killed on its first attempt, between writing a document
- * and committing it, is tried again and the folder ends byte for byte as after a clean run, with no temporary file
- * left; each task slot builds its pipeline once however many partitions it runs; and the check before work names
- * what an executor cannot use (a model it cannot read, an input it does not see). One embedded context (local[2],
- * four tries per task) serves the class. Documents are invented ferry maintenance logs.
+ * The Spark jobs below the command line (issue 11): a task killed on its first attempt (annotating: between writing a
+ * document and committing it; counting: half-way through its partition) is tried again, and the result is byte for
+ * byte that of a clean run: the same output folder with no temporary file left, the same counts, never counted twice;
+ * each task slot builds its pipeline once however many partitions it runs; and the check before work names what an
+ * executor cannot use (a model it cannot read, an input it does not see). One embedded context (local[2], four tries
+ * per task) serves the class. Documents are invented ferry maintenance logs.
  */
-class SparkAnnotationTest {
+class SparkJobTest {
     private static final String[] SENTENCES = {
             "Replaced the cracked gasket on the cooling pump with a spare from the stores.",
             "Found a slow leak in the fuel line near the starboard engine.",
@@ -118,6 +121,32 @@ class SparkAnnotationTest {
         assertEquals(16, b.annotated());
         assertEquals(a.decisions(), b.decisions());
         assertEquals(List.of(), b.failed());
+    }
+
+    @Test
+    void aCountingTaskKilledHalfWayIsRetriedAndNothingIsCountedTwice() throws Exception {
+        RawTextAttachmentCounting.Summary onThreads = new RawTextAttachmentCounting(2).count(List.of(in));
+        RawTextAttachmentCounting.Summary clean;
+        RawTextAttachmentCounting.Summary faulty;
+        INJECTED.set(0);
+        int before = PartitionCounting.built();
+        try (SparkJob job = SparkJob.start(SparkMaster.parse("local[2]"), "test")) {
+            clean = job.countRawText(List.of(in));
+            // Partition 0's first attempt dies after counting its first document: its counts must not survive.
+            faulty = job.countRawText(List.of(in), (partition, attempt, counted) -> {
+                if (partition == 0 && attempt == 0 && counted == 1) {
+                    INJECTED.incrementAndGet();
+                    throw new IOException("injected fault: the executor is lost");
+                }
+            });
+        }
+        assertEquals(1, INJECTED.get(), "the fault fired once, on the first attempt only");
+        assertEquals(16, faulty.counts().tally().documents());
+        assertTrue(faulty.counts().tally().prepositions() > 16, "the logs hold prepositions to count");
+        assertArrayEquals(onThreads.counts().toBytes(), clean.counts().toBytes());
+        assertArrayEquals(clean.counts().toBytes(), faulty.counts().toBytes());
+        // Two jobs of 8 partitions each on 2 slots: each slot built its counting flow once.
+        assertTrue(PartitionCounting.built() - before <= 4, "flows built: " + (PartitionCounting.built() - before));
     }
 
     @Test

@@ -17,18 +17,21 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * {@code tether annotate --spark local[2]} (issue 11) writes byte for byte what the run on threads writes: XMI,
- * ledgers, manifest and the run summary (all but its timing); a document that fails fails alone and is listed the same
- * way; and what cannot work stops the run before any output (a missing input, a master that cannot be reached, a
- * master that is no master, --threads beside --spark). One embedded Spark context serves the whole class. Documents
- * are invented maintenance logs of the fictional ferry operator.
+ * The commands on Spark (issue 11). {@code tether annotate --spark local[2]} writes byte for byte what the run on
+ * threads writes: XMI, ledgers, manifest and the run summary (all but its timing); a document that fails fails alone
+ * and is listed the same way; and what cannot work stops the run before any output (a missing input, a master that
+ * cannot be reached, a master that is no master, --threads beside --spark). {@code tether train --raw ... --spark
+ * local[2]} writes the model file byte for byte as the count on threads does, alone and mixed with labelled sources.
+ * One embedded Spark context serves the whole class. Documents are invented maintenance logs of the fictional ferry
+ * operator.
  */
-class AnnotateOnSparkTest {
+class CommandsOnSparkTest {
     private static final List<String> LOGS = List.of(
             "Replaced the cracked gasket on the cooling pump with a spare from the stores.\n",
             "Found a slow leak in the fuel line near the starboard engine.\n",
@@ -115,6 +118,53 @@ class AnnotateOnSparkTest {
         assertEquals(OutputFiles.of(threads), OutputFiles.of(onSpark));
         assertEquals(summaryWithoutTiming(threads), summaryWithoutTiming(onSpark));
         assertFalse(Files.exists(onSpark.resolve("log-05.txt.xmi")));
+    }
+
+    /** Raw text for training: each log sentence in many documents, so that counts reach above one. */
+    private Path writeRawText() throws Exception {
+        Path raw = Files.createDirectory(dir.resolve("raw"));
+        for (int d = 0; d < 24; d++) {
+            StringBuilder text = new StringBuilder();
+            for (int k = 0; k < 5; k++) text.append(LOGS.get((d * 5 + k) % LOGS.size()).strip()).append(' ');
+            Files.writeString(raw.resolve(String.format("shift-%02d.txt", d)), text.append('\n').toString());
+        }
+        Files.write(raw.resolve("shift-99.txt"), new byte[] {'o', 'k', 0, 1}); // skipped as binary, either way
+        return raw;
+    }
+
+    @Test
+    void trainOnSparkWritesTheModelBytesOfTheCountOnThreads() throws Exception {
+        Path raw = writeRawText();
+        Path onThreads = dir.resolve("threads.tether");
+        Path onSpark = dir.resolve("spark.tether");
+        CommandLineRun a = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onThreads.toString(), "--threads", "2");
+        CommandLineRun b = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onSpark.toString(), "--spark", "local[2]");
+        assertEquals(Tether.OK, a.exitCode(), a::toString);
+        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertTrue(b.out().contains("raw text: 24 documents") && b.out().contains("skipped 1 documents (1 binary)"), b::toString);
+        assertTrue(Files.size(onSpark) > 0);
+        assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark));
+    }
+
+    @Test
+    void trainOnSparkMixedWithLabelledSourcesWritesTheSameModel() throws Exception {
+        Path raw = writeRawText();
+        Path quadruples = FerryLogs.write(dir, "training.txt", FerryLogs.TRAINING);
+        Path treebank = dir.resolve("six.conllu");
+        try (var in = getClass().getResourceAsStream("ewt-dev-six-sentences.conllu")) {
+            Files.copy(in, treebank);
+        }
+        List<String> common = List.of("train", "--raw", raw.toString(), "--quadruples", quadruples.toString(),
+                "--conllu", treebank.toString(), "--no-tagger", "--out");
+        List<String> a = new ArrayList<>(common);
+        a.add(dir.resolve("threads.tether").toString());
+        List<String> b = new ArrayList<>(common);
+        b.addAll(List.of(dir.resolve("spark.tether").toString(), "--spark", "local[2]"));
+        CommandLineRun ra = CommandLineRun.of(a.toArray(new String[0]));
+        CommandLineRun rb = CommandLineRun.of(b.toArray(new String[0]));
+        assertEquals(Tether.OK, ra.exitCode(), ra::toString);
+        assertEquals(Tether.OK, rb.exitCode(), rb::toString);
+        assertArrayEquals(Files.readAllBytes(dir.resolve("threads.tether")), Files.readAllBytes(dir.resolve("spark.tether")));
     }
 
     @Test
