@@ -122,6 +122,8 @@ public final class CollectionRun {
                 if (byIndex[i] == null) throw new IOException("the job returned no outcome for " + tasks.get(i).doc());
                 commit(i, byIndex[i]);
             }
+            // Temporary files of attempts whose process died before it could delete them (a lost executor).
+            OutputFolder.removeTemporaryFiles(out);
         });
     }
 
