@@ -12,8 +12,11 @@ import dev.tether.treebank.TreebankExamples;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
+import dev.tether.model.RawWeightChoice;
 import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
 import dev.tether.preprocessing.TreebankTaggerTrainer;
 import dev.tether.spark.SparkJob;
 import dev.tether.spark.SparkLibraries;
@@ -49,7 +52,7 @@ final class TrainCommand implements Command {
     public String usage() {
         return "train [--quadruples FILE...] [--conllu FILE...] [--raw PATH...] [--raw-counts FILE...]"
                 + " [--corrections SHEET... [--correction-weight W]] [--base MODEL|default] [--raw-weight W]"
-                + " [--reestimate ROUNDS] [--threads N | --spark MASTER] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
+                + " [--reestimate ROUNDS] [--threads N | --spark MASTER] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
@@ -67,6 +70,9 @@ final class TrainCommand implements Command {
                 + "                        there are labelled sources, else 1)\n"
                 + "  --reestimate ROUNDS   rounds of re-estimation of ambiguous raw cases (default "
                 + RAW_ROUNDS + "; 0: unambiguous only)\n"
+                + "  --thesaurus FILE      a thesaurus from 'tether thesaurus build', stored in the model: where the\n"
+                + "                        back-off has little evidence, nearest neighbours of verb, noun and object decide\n"
+                + "  --save-raw-counts F   also write the merged raw counts to F (atomically)\n"
                 + "  --threads N           threads that count raw text (default 1; the model is the same for any N)\n"
                 + "  --spark MASTER        count the raw text on Apache Spark instead: local[N] (embedded), spark://host:port,\n"
                 + "                        yarn, k8s://...; the model is byte for byte the one counted on threads\n"
@@ -86,7 +92,7 @@ final class TrainCommand implements Command {
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1,
                 Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without", "raw",
-                        "raw-counts", "raw-weight", "reestimate", "threads", "spark"),
+                        "raw-counts", "raw-weight", "reestimate", "threads", "spark", "save-raw-counts", "thesaurus"),
                 Set.of("skip-malformed", "no-ranker", "no-tagger"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections") && !a.has("raw") && !a.has("raw-counts")) {
@@ -155,6 +161,11 @@ final class TrainCommand implements Command {
             }
             raw = merged.build();
             rawName = String.join("+", names);
+            if (a.has("save-raw-counts")) {
+                Path saved = Path.of(a.value("save-raw-counts", null));
+                raw.write(saved);
+                out.println("raw counts written to " + saved + " (give it to --raw-counts to train again without counting)");
+            }
             RawAttachmentCounts.Tally t = raw.tally();
             out.printf("raw counts: %,d prepositions with candidates, %,d unambiguous (%.1f%%), %,d ambiguous quadruple configurations%n",
                     t.prepositions(), t.unambiguous(), 100.0 * t.unambiguous() / Math.max(1, t.prepositions()), t.ambiguousQuadruples());
@@ -213,13 +224,38 @@ final class TrainCommand implements Command {
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
         }
         if (raw != null) {
-            double w = rawWeight != null ? rawWeight : 1.0;
-            trainer.addRawCounts(raw, rawName, w, rounds);
+            double w;
+            if (rawWeight != null) {
+                w = rawWeight;
+                trainer.addRawCounts(raw, rawName, w, rounds);
+            } else {
+                RawWeightChoice.Result choice = trainer.addRawCountsChoosingWeight(raw, rawName, rounds);
+                w = choice.weight();
+                if (choice.quadruples() > 0) {
+                    StringBuilder row = new StringBuilder();
+                    for (int i = 0; i < choice.weights().length; i++) {
+                        row.append(String.format("  %s: %.2f%%", InspectCommand.weight(choice.weights()[i]), 100 * choice.accuracy()[i]));
+                    }
+                    out.printf("raw weight chosen on %d folds of %,d labelled quadruples (held-out backed-off accuracy; without raw %.2f%%):%s%n",
+                            RawWeightChoice.FOLDS, choice.quadruples(), 100 * choice.withoutRaw(), row);
+                }
+            }
             out.printf("%-40s %,9d prepositions, weight %s, %d round%s of re-estimation%n", rawName, raw.tally().prepositions(),
                     InspectCommand.weight(w), rounds, rounds == 1 ? "" : "s");
         }
         int problems = 0;
         for (String f : a.values("corrections")) problems += CorrectionEvents.add(trainer, Path.of(f), correctionWeight, out, err);
+        if (a.has("thesaurus")) {
+            Path file = Path.of(a.value("thesaurus", null));
+            Thesaurus thesaurus = ThesaurusFile.read(file);
+            try {
+                trainer.withThesaurus(thesaurus);
+            } catch (IllegalArgumentException e) {
+                throw new IOException(file + ": " + e.getMessage(), e);
+            }
+            out.printf("thesaurus: %s, %,d words (%s), stored in the model for similarity smoothing%n", file.getFileName(),
+                    thesaurus.size(), thesaurus.settings().weighting() + "/" + thesaurus.settings().measure());
+        }
         if (a.has("no-tagger")) trainer.withTagger(null);
         else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
         long start = System.nanoTime();

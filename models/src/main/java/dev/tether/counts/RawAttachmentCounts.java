@@ -26,8 +26,9 @@ import java.util.zip.InflaterInputStream;
  *       outcome, a noun event (noun, preposition, object) with the noun outcome (Hindle &amp; Rooth 1993;
  *       Ratnaparkhi 1998).</li>
  *   <li>{@link #cooccurrence()}: head–preposition–object co-occurrence for the head-choice association statistics:
- *       every candidate of every preposition is a trial of its keys, and the head of an unambiguous attachment also a
- *       hit. No structural counts: positions in unambiguous sentences are not those of ambiguous ones.</li>
+ *       every candidate of every preposition is a trial of its lexical and structural keys, and the head of an
+ *       unambiguous attachment also a hit (so the structural rates lean to what the unambiguous rule picks: the
+ *       nearest verb, or a nearest noun with no verb near).</li>
  *   <li>{@link #ambiguous()}: the ambiguous verb–noun–preposition–noun configurations, counted as trials only (no
  *       outcome), for re-estimation ({@code dev.tether.model.RawReestimation}).</li>
  * </ul>

@@ -2,6 +2,7 @@ package dev.tether.counts;
 
 import dev.tether.attachment.AttachmentQuery;
 import dev.tether.attachment.AttachmentSite;
+import dev.tether.attachment.CandidateStructure;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.candidates.HeadClass;
 import dev.tether.vocabulary.WordNormalizer;
@@ -32,9 +33,11 @@ public final class RawAttachmentCountsBuilder {
         String p = normalizer.preposition(q.preposition());
         String o = normalizer.noun(q.object());
         int sole = soleHead(q);
+        long[] structure = CandidateStructure.keys(q);
         for (int i = 0; i < q.size(); i++) {
             HeadClass c = q.headClass(i);
             cooccurrence.addLexical(p, HeadChoiceScorer.headKey(normalizer, q.head(i), c), c.ordinal(), o, i == sole, 1.0);
+            cooccurrence.addStructure(structure[i], i == sole, 1.0);
         }
         if (sole >= 0) {
             unambiguous++;

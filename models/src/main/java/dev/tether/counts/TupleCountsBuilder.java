@@ -7,10 +7,11 @@ import java.util.function.LongUnaryOperator;
 
 /** Accumulates counts for a {@link TupleCounts}. Adding is commutative and associative, so shards can be counted apart and added. */
 public final class TupleCountsBuilder {
-    private final TLongIntHashMap slots = new TLongIntHashMap(1024, 0.5f, Long.MIN_VALUE, -1);
-    private long[] keys = new long[1024];
-    private double[] hits = new double[1024];
-    private double[] trials = new double[1024];
+    // Small at first: a model keeps several tables per preposition, and raw text brings hundreds of rare ones.
+    private final TLongIntHashMap slots = new TLongIntHashMap(16, 0.5f, Long.MIN_VALUE, -1);
+    private long[] keys = new long[16];
+    private double[] hits = new double[16];
+    private double[] trials = new double[16];
     private int size;
 
     public void add(long key, double hit, double trial) {

@@ -6,6 +6,9 @@ import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.AtomicFileWriter;
 import dev.tether.io.ChecksummedFile;
 import dev.tether.io.Sha256;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
+import dev.tether.similarity.ThesaurusFormatException;
 
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
@@ -38,7 +41,8 @@ import java.util.zip.InflaterInputStream;
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
  * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
- * {@code source-weights} (how much each source's events count, when some weight is not 1),
+ * {@code source-weights} (how much each source's events count, when some weight is not 1), {@code thesaurus} (a whole
+ * thesaurus file, for similarity smoothing),
  * {@code attachment-ranker} (its own version, feature families, feature keys and weights) and {@code tagger} (a
  * part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
@@ -53,6 +57,8 @@ public final class ModelFile {
     private static final String HEAD_CHOICE = "head-choice";
     private static final String ATTACHMENT_RANKER = "attachment-ranker";
     private static final String TAGGER = "tagger";
+    /** Optional: a whole thesaurus file (its own header, version and checksum), for similarity smoothing. */
+    private static final String THESAURUS = "thesaurus";
     /** Optional: each source's weight, in source order; written only when some weight is not 1. */
     private static final String SOURCE_WEIGHTS = "source-weights";
 
@@ -62,7 +68,7 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null), model.tagger().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -86,13 +92,24 @@ public final class ModelFile {
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus) throws IOException {
+        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus));
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
-        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger));
+        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
+    }
+
+    static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                                        HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
+        return sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
     }
 
     /** The named sections of a model, in file order. */
     static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                                        HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
+                                        HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger,
+                                        Thesaurus thesaurus) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -119,6 +136,7 @@ public final class ModelFile {
             sections.put(ATTACHMENT_RANKER, section(out -> AttachmentRanker.write(ranker.weights(), ranker.families(), out)));
         }
         if (tagger != null) sections.put(TAGGER, section(tagger::write));
+        if (thesaurus != null) sections.put(THESAURUS, ThesaurusFile.toBytes(thesaurus));
         return sections;
     }
 
@@ -183,7 +201,16 @@ public final class ModelFile {
             }
             byte[] tag = sections.get(TAGGER);
             TaggerSection tagger = tag == null ? null : TaggerSection.read(tag, name);
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger,
+            byte[] thesaurusBytes = sections.get(THESAURUS);
+            Thesaurus thesaurus = null;
+            if (thesaurusBytes != null) {
+                try {
+                    thesaurus = ThesaurusFile.fromBytes(thesaurusBytes, "the thesaurus section of " + name);
+                } catch (ThesaurusFormatException e) {
+                    throw new ModelFormatException(e.getMessage() + " Retrain the model with this version ('tether train --thesaurus').", e);
+                }
+            }
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus,
                     java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;

@@ -21,6 +21,7 @@ import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.ranking.RankerModel;
+import dev.tether.similarity.Thesaurus;
 import dev.tether.ranking.RankerTrainer;
 import dev.tether.treebank.TreebankExamples;
 import dev.tether.vocabulary.WordNormalizer;
@@ -64,6 +65,7 @@ public final class ModelTrainer {
     private RankerTrainer rankerTrainer = new RankerTrainer();
     private boolean rankerWanted = true;
     private TaggerSection tagger;
+    private Thesaurus thesaurus;
 
     /** Counts every quadruple of {@code set}. */
     public ModelTrainer addQuadruples(QuadrupleSet set) {
@@ -147,6 +149,7 @@ public final class ModelTrainer {
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
         if (tagger == null) tagger = model.tagger().orElse(null);
+        if (thesaurus == null) thesaurus = model.thesaurus().orElse(null);
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
         return this;
     }
@@ -170,6 +173,23 @@ public final class ModelTrainer {
         sources.add(new ModelSource(name, "raw", raw.tally().prepositions(), raw.tally().skippedDocuments(),
                 dev.tether.io.Sha256.hex(raw.toBytes()), weight));
         return this;
+    }
+
+    /**
+     * Like {@link #addRawCounts}, with the weight chosen on folds of the labelled quadruples added so far (given and
+     * read off treebanks; see {@link RawWeightChoice}); with none, the weight is 1. Add the labelled sources first.
+     */
+    public RawWeightChoice.Result addRawCountsChoosingWeight(RawAttachmentCounts raw, String name, int rounds) {
+        List<LabelledQuadruple> labelled = new ArrayList<>(fixedQuadruples);
+        labelled.addAll(exampleQuadruples);
+        RawWeightChoice.Result choice;
+        if (labelled.isEmpty()) {
+            choice = new RawWeightChoice.Result(1.0, new double[0], new double[0], 0, 0);
+        } else {
+            choice = RawWeightChoice.choose(labelled, baseModels, AmbiguousReestimation.of(raw, rounds).quadruples(), normalizer);
+        }
+        addRawCounts(raw, name, choice.weight(), rounds);
+        return choice;
     }
 
     /**
@@ -214,6 +234,19 @@ public final class ModelTrainer {
         return this;
     }
 
+    /**
+     * The distributional thesaurus the model will carry for similarity smoothing ({@link TetherModel#thesaurus()});
+     * it replaces one taken over from a base model. {@code null}: none.
+     */
+    public ModelTrainer withThesaurus(Thesaurus thesaurus) {
+        if (thesaurus != null && !thesaurus.normalizerVersion().equals(WordNormalizer.VERSION)) {
+            throw new IllegalArgumentException("the thesaurus keys its words with normalization " + thesaurus.normalizerVersion()
+                    + ", this build uses " + WordNormalizer.VERSION + "; build it again");
+        }
+        this.thesaurus = thesaurus;
+        return this;
+    }
+
     /** Whether the model will carry a tagger (one set here or taken over from a base model). */
     public boolean hasTagger() {
         return tagger != null;
@@ -235,8 +268,9 @@ public final class ModelTrainer {
             }
         }
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, ModelFile.fingerprint(encoded));
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus,
+                    ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }

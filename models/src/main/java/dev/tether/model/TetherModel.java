@@ -2,6 +2,11 @@ package dev.tether.model;
 
 import dev.tether.attachment.AttachmentQuery;
 import dev.tether.attachment.AttachmentRanker;
+import dev.tether.attachment.BackedOffScorer;
+import dev.tether.attachment.LexicalAssociationScorer;
+import dev.tether.attachment.QuadrupleScorer;
+import dev.tether.attachment.SimilarityBackedOffScorer;
+import dev.tether.similarity.Thesaurus;
 import dev.tether.attachment.HeadChoice;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.counts.HeadChoiceCounts;
@@ -35,9 +40,12 @@ public final class TetherModel {
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
     private final AttachmentRanker attachmentRanker;
+    private final Thesaurus thesaurus;
+    private final QuadrupleScorer quadrupleScorer;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, String id) {
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
+                String id) {
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
@@ -46,6 +54,10 @@ public final class TetherModel {
         this.id = id;
         this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
         this.attachmentRanker = attachmentRanker;
+        this.thesaurus = thesaurus;
+        this.quadrupleScorer = unlabelledOnly(sources) ? new LexicalAssociationScorer(quadruples)
+                : thesaurus == null ? new BackedOffScorer(quadruples)
+                : new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer);
     }
 
     public String normalizerVersion() { return normalizerVersion; }
@@ -62,6 +74,23 @@ public final class TetherModel {
         return attachmentRanker != null ? attachmentRanker.choose(q) : headChoiceScorer.choose(q);
     }
     public WordNormalizer normalizer() { return normalizer; }
+    /** The distributional thesaurus the model was trained with ({@code train --thesaurus}), if any. */
+    public Optional<Thesaurus> thesaurus() { return Optional.ofNullable(thesaurus); }
+    /** Whether every source is unlabelled text (no outcome was ever observed, only inferred). */
+    private static boolean unlabelledOnly(List<ModelSource> sources) {
+        if (sources.isEmpty()) return false;
+        for (ModelSource s : sources) if (!s.kind().equals("raw")) return false;
+        return true;
+    }
+
+    /**
+     * The model's quadruple scorer. A model counted from unlabelled text alone uses lexical association (Hindle &amp;
+     * Rooth 1993), the method made for such counts: its estimates compare how often verb and noun take the
+     * preposition, which survives the skew of the unambiguous cases towards verbs that defeats the back-off's pooled
+     * relative frequencies (quadruple devset: 76.26% against 69.82%, README). Otherwise the back-off smoothed by the thesaurus ({@link SimilarityBackedOffScorer}) when
+     * the model has one, else the plain back-off ({@link BackedOffScorer}). Built once; thread-safe.
+     */
+    public QuadrupleScorer quadrupleScorer() { return quadrupleScorer; }
     /** The part-of-speech tagger trained with this model, if it was trained with one (opaque bytes; see {@link TaggerSection}). */
     public Optional<TaggerSection> tagger() { return Optional.ofNullable(tagger); }
 
