@@ -1,6 +1,7 @@
 package dev.tether.model;
 
 import dev.tether.attachment.AttachmentRanker;
+import dev.tether.coordination.CoordinationRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.AtomicFileWriter;
@@ -38,8 +39,10 @@ import java.util.zip.InflaterInputStream;
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
  * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
- * {@code attachment-ranker} (its own version, feature families, feature keys and weights) and {@code tagger} (a
- * part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
+ * {@code attachment-ranker} (its own version, feature families, feature keys and weights), {@code tagger} (a
+ * part-of-speech tagger, see {@link TaggerSection}, with a version of its own) and {@code coordination-ranker}
+ * ({@link CoordinationRanker}: its version, families, coordination counts and two weight sets; a model without it, or
+ * with another version of it, loads and makes no coordination decisions); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -52,6 +55,8 @@ public final class ModelFile {
     private static final String HEAD_CHOICE = "head-choice";
     private static final String ATTACHMENT_RANKER = "attachment-ranker";
     private static final String TAGGER = "tagger";
+    private static final String COORDINATION_RANKER = "coordination-ranker";
+    private static final java.util.logging.Logger LOG = java.util.logging.Logger.getLogger(ModelFile.class.getName());
 
     private ModelFile() {
     }
@@ -59,7 +64,7 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null), model.tagger().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.coordinationRanker().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -84,7 +89,15 @@ public final class ModelFile {
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
-        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger));
+        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger,
+                         CoordinationRanker coordination) throws IOException {
+        Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger);
+        if (coordination != null) sections.put(COORDINATION_RANKER, section(out -> CoordinationRanker.write(coordination, out)));
+        return pack(sections);
     }
 
     /** The named sections of a model, in file order. */
@@ -163,7 +176,21 @@ public final class ModelFile {
             }
             byte[] tag = sections.get(TAGGER);
             TaggerSection tagger = tag == null ? null : TaggerSection.read(tag, name);
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger,
+            CoordinationRanker coordination = null;
+            byte[] coordinationBytes = sections.get(COORDINATION_RANKER);
+            if (coordinationBytes != null) {
+                int version = CoordinationRanker.readVersion(coordinationBytes);
+                if (version == CoordinationRanker.VERSION) {
+                    coordination = CoordinationRanker.read(new DataInputStream(new ByteArrayInputStream(coordinationBytes)));
+                } else {
+                    // A coordination ranker of another version is left out rather than refusing the whole model:
+                    // attachment still works, and engines say that no coordination decisions are written.
+                    LOG.warning(name + " has a coordination ranker of version " + version + "; this build reads version "
+                            + CoordinationRanker.VERSION + ", so the model makes no coordination decisions. Retrain it "
+                            + "with 'tether train --conllu' to get them.");
+                }
+            }
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, coordination,
                     java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;

@@ -4,6 +4,7 @@ import dev.tether.attachment.AttachmentQuery;
 import dev.tether.attachment.AttachmentRanker;
 import dev.tether.attachment.HeadChoice;
 import dev.tether.attachment.HeadChoiceScorer;
+import dev.tether.coordination.CoordinationRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.vocabulary.WordNormalizer;
@@ -35,9 +36,17 @@ public final class TetherModel {
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
     private final AttachmentRanker attachmentRanker;
+    private final CoordinationRanker coordinationRanker;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, String id) {
+        this(normalizerVersion, sources, quadruples, headChoice, attachmentRanker, tagger, null, id);
+    }
+
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger,
+                CoordinationRanker coordinationRanker, String id) {
+        this.coordinationRanker = coordinationRanker;
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
@@ -56,6 +65,13 @@ public final class TetherModel {
     public HeadChoiceScorer headChoiceScorer() { return headChoiceScorer; }
     /** The learned attachment ranker, present when the model was trained with head-choice examples. */
     public Optional<AttachmentRanker> attachmentRanker() { return Optional.ofNullable(attachmentRanker); }
+
+    /**
+     * The learned coordination ranker, present when the model was trained from treebanks with this version of
+     * Tether; without it no coordination decisions are made. It carries no thesaurus: callers that have one give it
+     * with {@link CoordinationRanker#withThesaurus}.
+     */
+    public Optional<CoordinationRanker> coordinationRanker() { return Optional.ofNullable(coordinationRanker); }
 
     /** The model's head choice: the ranker's when it has one, else the count-based score's. */
     public HeadChoice chooseHead(AttachmentQuery q) {
