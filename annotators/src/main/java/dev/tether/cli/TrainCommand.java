@@ -120,6 +120,8 @@ final class TrainCommand implements Command {
             trainer.addTreebank(t, file.getFileName().toString(), fileSha256(file));
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
+            // The same trees train the coordination ranker.
+            trainer.addCoordinationSentences(dev.tether.treebank.ConlluReader.readAll(file));
         }
         int problems = 0;
         for (String f : a.values("corrections")) problems += CorrectionEvents.add(trainer, Path.of(f), correctionWeight, out, err);

@@ -1,8 +1,9 @@
 package dev.tether.coordination;
 
 /**
- * The ranker's answer for one coordinator: the probability of every candidate pair of conjunct heads, the pairs in
- * order best first, and for the best {@code k} pairs the probability that each of their modifiers is shared. A
+ * The ranker's answer for one coordinator: the probability of every candidate pair of conjunct heads, and for the
+ * {@code k} likeliest pairs the probability that each of their modifiers is shared; those k readings are ordered by
+ * their own probability, best first. A
  * reading is a pair with its modifiers shared where that is likelier than not; its probability is the pair's times
  * that of each scope decision.
  */
@@ -13,8 +14,22 @@ public final class CoordinationChoice {
 
     CoordinationChoice(double[] pairProbabilities, int[] order, double[][] shared) {
         this.pairProbabilities = pairProbabilities;
-        this.order = order;
-        this.shared = shared;
+        // The k readings, each its pair with its scope decisions, best first by the reading's probability (stable).
+        int k = shared.length;
+        Integer[] byReading = new Integer[k];
+        double[] p = new double[k];
+        for (int r = 0; r < k; r++) {
+            byReading[r] = r;
+            p[r] = pairProbabilities[order[r]];
+            for (double s : shared[r]) p[r] *= Math.max(s, 1 - s);
+        }
+        java.util.Arrays.sort(byReading, (a, b) -> p[a] != p[b] ? Double.compare(p[b], p[a]) : Integer.compare(a, b));
+        this.order = order.clone();
+        this.shared = new double[k][];
+        for (int r = 0; r < k; r++) {
+            this.order[r] = order[byReading[r]];
+            this.shared[r] = shared[byReading[r]];
+        }
     }
 
     /** Number of readings ranked with their scope (at most the k asked for). */
