@@ -28,7 +28,7 @@ public final class ConjunctCandidateProposer {
     /** First-conjunct heads kept of each other class. */
     public static final int MAX_OTHER_CLASS = 2;
     /** Readings of the last conjunct's head kept. */
-    public static final int MAX_RIGHT = 4;
+    public static final int MAX_RIGHT = 5;
     /** Tokens after the coordinator scanned for the last conjunct. */
     public static final int FORWARD_WINDOW = 12;
     /** Premodifiers of a nominal first conjunct considered. */
@@ -40,6 +40,7 @@ public final class ConjunctCandidateProposer {
 
     private static final String[] PRECONJUNCTIONS = {"both", "either", "neither", "whether"};
     private static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re"};
+    private static final String[] AUXILIARIES = {"have", "has", "had", "'ve", "'d", "do", "does", "did", "having"};
     private static final String[] SUBORDINATORS = {"because", "if", "that", "while", "as", "since", "though", "although",
             "unless", "whether", "than", "so", "once", "until", "after", "before"};
 
@@ -132,10 +133,18 @@ public final class ConjunctCandidateProposer {
         if (kinds[s] == ADJECTIVE || kinds[s] == ADVERB) {
             count = add(heads, classes, count, s, kinds[s] == ADJECTIVE ? HeadClass.ADJECTIVE : HeadClass.ADVERB);
         }
+        // "and very dangerous": an adjective after adverbs.
+        if (v > s && v < n && kinds[v] == ADJECTIVE) count = add(heads, classes, count, v, HeadClass.ADJECTIVE);
         // "and in Washington": the conjunct is the object of the preposition.
         int g = kinds[s] == PREPOSITION && !isOneOf(words[s], SUBORDINATORS) && s + 1 < n ? s + 1 : s;
         int noun = nounGroupHead(kinds, g);
-        if (noun >= 0) count = add(heads, classes, count, noun, HeadClass.NOUN);
+        if (noun >= 0) {
+            count = add(heads, classes, count, noun, HeadClass.NOUN);
+            // "ham and cheese sandwich": the first noun of a compound may be the conjunct.
+            int first = g;
+            while (first < noun && !(kinds[first] == NOUN || kinds[first] == PROPER || kinds[first] == NUMBER)) first++;
+            if (first < noun && !(kinds[first] == PROPER && kinds[noun] == PROPER)) count = add(heads, classes, count, first, HeadClass.NOUN);
+        }
         // A clause after the coordinator ("... and the engineer replaced the seals", "but if one raises doubts"):
         // the first verb group within the window.
         for (int k = Math.max(s, noun + 1); k < end; k++) {
@@ -189,6 +198,11 @@ public final class ConjunctCandidateProposer {
                 if (h >= 0) return new int[] {h, HeadClass.NOUN.ordinal()};
             }
             if (p < n && kinds[p] == PARTICIPLE) return new int[] {p, HeadClass.VERB.ordinal()};
+            // "are not in the same cage", "is by the beach": the object of a prepositional predicate.
+            if (p + 1 < n && kinds[p] == PREPOSITION && !isOneOf(words[p], SUBORDINATORS)) {
+                int h = nounGroupHead(kinds, p + 1);
+                if (h >= 0) return new int[] {h, HeadClass.NOUN.ordinal()};
+            }
         }
         return new int[] {last, HeadClass.VERB.ordinal()};
     }
@@ -347,7 +361,7 @@ public final class ConjunctCandidateProposer {
     }
 
     private static boolean isAuxiliary(String word) {
-        return isOneOf(word, FORMS_OF_BE) || isOneOf(word, new String[] {"have", "has", "had", "do", "does", "did", "having"});
+        return isOneOf(word, FORMS_OF_BE) || isOneOf(word, AUXILIARIES);
     }
 
     private static boolean isVerb(byte kind) {

@@ -45,6 +45,8 @@ enum CoordinationFeature {
     DISTANCE(CoordinationFeatureFamily.DISTANCE, 1),
     /** Rank among left candidates of the same class; parts: rank, same class (1) or not, class pair. */
     RANK(CoordinationFeatureFamily.DISTANCE, 1),
+    /** Candidates of the same class farther from the coordinator (0, 1, 2 or more); parts: count, same class as the right, class pair. */
+    RANK_FROM_START(CoordinationFeatureFamily.DISTANCE, 1),
     /** The left head ends its group (no noun right after it); parts: class. */
     GROUP_END(CoordinationFeatureFamily.DISTANCE, 1),
     /** Commas between the left head and the coordinator; parts: bucket, comma right before (1) or not, class pair. */
@@ -59,6 +61,18 @@ enum CoordinationFeature {
     RIGHT_CLAUSE(CoordinationFeatureFamily.STRUCTURE, 1),
     /** The word before the left head's group; parts: tag, class pair. */
     LEFT_CONTEXT(CoordinationFeatureFamily.STRUCTURE, 2),
+    /** The left head is itself a middle item of a longer list this coordinator ends; parts: class pair. */
+    INSIDE_LIST(CoordinationFeatureFamily.PUNCTUATION, 1),
+    /** Where the left head sits in its name or noun group (0 alone or last, 1 first of a name, 2 inside a name); parts: position, class pair. */
+    GROUP_POSITION(CoordinationFeatureFamily.PARALLELISM, 1),
+    /** A verb follows the last conjunct's noun group, which then reads as a subject; parts: class pair. */
+    RIGHT_SUBJECT_OF_VERB(CoordinationFeatureFamily.STRUCTURE, 1),
+    /** Verbs between the left head and the coordinator; parts: bucket, class pair. */
+    VERBS_BETWEEN(CoordinationFeatureFamily.DISTANCE, 1),
+    /** The tag after the left head; parts: tag, class pair. */
+    LEFT_NEXT_TAG(CoordinationFeatureFamily.STRUCTURE, 2),
+    /** The tag after the last conjunct's head; parts: tag, class pair. */
+    RIGHT_NEXT_TAG(CoordinationFeatureFamily.STRUCTURE, 2),
 
     // Scope templates (on the "shared" reading)
     /** Sharing a modifier of this kind; parts: kind, left class, right class. */
@@ -127,12 +141,20 @@ enum CoordinationFeature {
             case DISTANCE: return "the distance of the first head from the coordinator";
             case RANK: return a == 0 ? "the nearest candidate of its class" : "a candidate with " + a + (a == 3 ? " or more" : "") + " nearer of its class";
             case GROUP_END: return "a head at the end of its phrase";
+            case RANK_FROM_START: return a == 0 ? "the first candidate of its class in the clause" : "a candidate with " + a + (a == 2 ? " or more" : "") + " of its class before it";
             case COMMAS: return "commas between the conjuncts";
             case LIST: return "a comma list";
             case INNER_COORDINATOR: return "another coordinator between the conjuncts";
             case COORDINATOR: return "'" + COORDINATORS[a] + "' between these classes";
             case RIGHT_CLAUSE: return "the last conjunct has its own subject";
             case LEFT_CONTEXT: return "the word before the first conjunct tagged " + PennTags.tag(a);
+            case INSIDE_LIST: return "a first head inside a longer list";
+            case GROUP_POSITION: return new String[] {"a first head at the end of its phrase", "the first word of a name",
+                    "a word inside a name"}[Math.min(a, 2)];
+            case RIGHT_SUBJECT_OF_VERB: return "a verb after the last conjunct";
+            case VERBS_BETWEEN: return "verbs between the conjuncts";
+            case LEFT_NEXT_TAG: return "the word after the first head tagged " + PennTags.tag(a);
+            case RIGHT_NEXT_TAG: return "the word after the last head tagged " + PennTags.tag(a);
             case SHARED: return "how often such a modifier is shared";
             case SHARED_COORDINATOR: return "sharing with '" + COORDINATORS[FeatureKey.b(key)] + "'";
             case SHARED_TAG: return "sharing a modifier tagged " + PennTags.tag(FeatureKey.b(key));

@@ -59,6 +59,17 @@ public final class CoordinationFeatureExtractor {
         int[] rankOf = new int[HeadClass.values().length * ConjunctCandidateProposer.MAX_RIGHT];
         int lastRight = -2;
         int readingIndex = -1;
+        // How many candidates of each class each reading has, for the rank counted from the far end.
+        int[] classCount = new int[HeadClass.values().length * cc.size()];
+        int[] readingOf = new int[cc.size()];
+        for (int i = 0, r = -1, last = -2; i < cc.size(); i++) {
+            if (cc.pair(i).right() != last) {
+                last = cc.pair(i).right();
+                r++;
+            }
+            readingOf[i] = r;
+            classCount[r * 4 + cc.pair(i).leftClass().ordinal()]++;
+        }
         for (int i = 0; i < cc.size(); i++) {
             ConjunctPair p = cc.pair(i);
             if (p.right() != lastRight) {
@@ -101,8 +112,20 @@ public final class CoordinationFeatureExtractor {
             if (on(CoordinationFeatureFamily.DISTANCE)) {
                 out.add(CoordinationFeature.DISTANCE.key(distanceBucket(c - p.left()), 0, pairClass), 1);
                 out.add(CoordinationFeature.RANK.key(Math.min(rank, 3), lc == rc ? 1 : 0, pairClass), 1);
+                int fromStart = classCount[readingOf[i] * 4 + lc] - rank - 1;
+                out.add(CoordinationFeature.RANK_FROM_START.key(Math.min(fromStart, 2), lc == rc ? 1 : 0, pairClass), 1);
                 boolean groupEnd = p.left() + 1 >= w.length || ConjunctCandidateProposer.classOfTag(t[p.left() + 1]) != HeadClass.NOUN;
                 if (groupEnd) out.add(CoordinationFeature.GROUP_END.key(0, 0, lc), 1);
+                int verbs = 0;
+                for (int k = p.left() + 1; k < c; k++) if (t[k].startsWith("VB") || t[k].equals("MD")) verbs++;
+                out.add(CoordinationFeature.VERBS_BETWEEN.key(Math.min(verbs, 3), 0, pairClass), 1);
+            }
+            if (on(CoordinationFeatureFamily.PARALLELISM)) {
+                boolean proper = t[p.left()].startsWith("NNP");
+                boolean properBefore = p.left() > 0 && t[p.left() - 1].startsWith("NNP");
+                boolean properAfter = p.left() + 1 < w.length && t[p.left() + 1].startsWith("NNP");
+                int position = !proper ? 0 : properBefore ? 2 : properAfter ? 1 : 0;
+                out.add(CoordinationFeature.GROUP_POSITION.key(position, 0, pairClass), 1);
             }
             if (on(CoordinationFeatureFamily.PUNCTUATION)) {
                 int commas = 0;
@@ -114,6 +137,7 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.COMMAS.key(Math.min(commas, 3), t[c - 1].equals(",") ? 1 : 0, pairClass), 1);
                 if (p.middle().length > 0) out.add(CoordinationFeature.LIST.key(0, 0, pairClass), 1);
                 if (inner) out.add(CoordinationFeature.INNER_COORDINATOR.key(0, 0, pairClass), 1);
+                if (insideList(cc, i)) out.add(CoordinationFeature.INSIDE_LIST.key(0, 0, pairClass), 1);
             }
             if (on(CoordinationFeatureFamily.STRUCTURE)) {
                 out.add(CoordinationFeature.COORDINATOR.key(coordinator, 0, pairClass), 1);
@@ -122,6 +146,18 @@ public final class CoordinationFeatureExtractor {
                 }
                 int before = p.leftBegin() - 1;
                 out.add(CoordinationFeature.LEFT_CONTEXT.key(before >= 0 ? PennTags.id(t[before]) : 0, 0, pairClass), 1);
+                int leftNext = p.left() + 1 < w.length ? PennTags.id(t[p.left() + 1]) : 0;
+                out.add(CoordinationFeature.LEFT_NEXT_TAG.key(leftNext, 0, pairClass), 1);
+                int rightNext = p.right() + 1 < w.length ? PennTags.id(t[p.right() + 1]) : 0;
+                out.add(CoordinationFeature.RIGHT_NEXT_TAG.key(rightNext, 0, pairClass), 1);
+                if (p.rightClass() == HeadClass.NOUN) {
+                    int k = p.right() + 1;
+                    while (k < w.length && (t[k].startsWith("RB") || t[k].equals("MD"))) k++;
+                    if (k < w.length && (t[k].equals("VBD") || t[k].equals("VBZ") || t[k].equals("VBP") || t[k].equals("MD")
+                            || k > p.right() + 1 && t[k].startsWith("VB"))) {
+                        out.add(CoordinationFeature.RIGHT_SUBJECT_OF_VERB.key(0, 0, pairClass), 1);
+                    }
+                }
             }
             if (thesaurus != null && (on(CoordinationFeatureFamily.SIMILARITY) || on(CoordinationFeatureFamily.COMPOSITION))) {
                 int a = thesaurusId(w[p.left()], t[p.left()]);
@@ -194,6 +230,17 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.SHARED_SIMILARITY.key(kind, 0, 0), thesaurus.similarity(a, b));
             }
         }
+    }
+
+    /** Whether the left head of pair {@code i} is a middle item of another pair's list with the same last conjunct. */
+    private static boolean insideList(CoordinatorCandidates cc, int i) {
+        ConjunctPair p = cc.pair(i);
+        for (int j = 0; j < cc.size(); j++) {
+            ConjunctPair o = cc.pair(j);
+            if (j == i || o.right() != p.right()) continue;
+            for (int m : o.middle()) if (m == p.left()) return true;
+        }
+        return false;
     }
 
     /** Whether the far conjunct has its own word of the modifier's kind (its own subject, premodifier, phrase). */
