@@ -271,8 +271,9 @@ public final class ConjunctCandidateProposer {
             if (leftClass == HeadClass.NOUN) b = groupBegin(kinds, left);
             int k = b - 1;
             boolean predicate = leftClass == HeadClass.VERB;
+            // Before a verb: its auxiliaries; before a noun or adjective: a copula ("the pump is old and leaky").
             while (k >= 0 && b - k < GROUP && (kinds[k] == ADVERB || kinds[k] == MODAL || kinds[k] == TO
-                    || (isVerb(kinds[k]) && (leftClass != HeadClass.VERB || isAuxiliary(words[k]))))) {
+                    || (isVerb(kinds[k]) && (leftClass == HeadClass.VERB ? isAuxiliary(words[k]) : isOneOf(words[k], FORMS_OF_BE))))) {
                 if (isVerb(kinds[k])) predicate = true;
                 k--;
             }

@@ -147,7 +147,7 @@ enum CoordinationFeature {
             case INNER_COORDINATOR: return "another coordinator between the conjuncts";
             case COORDINATOR: return "'" + COORDINATORS[a] + "' between these classes";
             case RIGHT_CLAUSE: return "the last conjunct has its own subject";
-            case LEFT_CONTEXT: return "the word before the first conjunct tagged " + PennTags.tag(a);
+            case LEFT_CONTEXT: return a == 0 ? "a first conjunct at the start of the sentence" : "the word before the first conjunct tagged " + PennTags.tag(a);
             case INSIDE_LIST: return "a first head inside a longer list";
             case GROUP_POSITION: return new String[] {"a first head at the end of its phrase", "the first word of a name",
                     "a word inside a name"}[Math.min(a, 2)];
