@@ -87,6 +87,16 @@ final class EvaluateCommand implements Command {
             out.printf("%-14s %7.1f%% %8d %8.2f%%%n", b.getKey().label(), 100.0 * b.getValue().total() / main.total(),
                     b.getValue().total(), 100 * b.getValue().value());
         }
+        if (!e.smoothingByLevel().isEmpty()) {
+            out.println();
+            out.printf("similarity smoothing by level of the plain back-off (same items)%n%-14s %8s %9s %9s %7s%n",
+                    "plain level", "n", "plain", "smoothed", "gain");
+            for (Map.Entry<DecisionBasis, Accuracy[]> b : e.smoothingByLevel().entrySet()) {
+                Accuracy[] pair = b.getValue();
+                out.printf("%-14s %8d %8.2f%% %8.2f%% %+6.2f%n", b.getKey().label(), pair[0].total(), 100 * pair[0].value(),
+                        100 * pair[1].value(), 100 * (pair[1].value() - pair[0].value()));
+            }
+        }
         out.println();
         out.printf("confusion (rows gold, columns chosen)%n%-10s %8s %8s%n", "", "noun", "verb");
         for (AttachmentSite gold : AttachmentSite.values()) {

@@ -32,6 +32,11 @@ final class InspectCommand implements Command {
                 + "  default   the shipped default model\n";
     }
 
+    /** A source's weight as printed: up to four significant digits. */
+    static String weight(double w) {
+        return new java.math.BigDecimal(w).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
+    }
+
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of(), Set.of(), 1);
@@ -43,10 +48,13 @@ final class InspectCommand implements Command {
         out.println("id             " + m.id());
         out.println("format         version " + ModelFile.FORMAT_VERSION);
         out.println("normalization  " + m.normalizerVersion());
-        out.println("sources");
+        out.println("sources (share: weight x items over the sum of all sources)");
+        double all = 0;
+        for (ModelSource s : m.sources()) all += s.weight() * s.items();
         for (ModelSource s : m.sources()) {
-            out.printf("  %-12s %-36s %,10d items%s  sha256 %s%n", s.kind(), s.name(), s.items(),
-                    s.skipped() > 0 ? String.format(" (%,d skipped)", s.skipped()) : "", s.sha256().substring(0, Math.min(16, s.sha256().length())));
+            out.printf("  %-12s %-36s %,10d items%s  weight %-7s share %5.1f%%  sha256 %s%n", s.kind(), s.name(), s.items(),
+                    s.skipped() > 0 ? String.format(" (%,d skipped)", s.skipped()) : "", weight(s.weight()),
+                    all > 0 ? 100 * s.weight() * s.items() / all : 0, s.sha256().substring(0, Math.min(16, s.sha256().length())));
         }
         out.printf("vocabulary     %,d words, %,d prepositions%n", q.words().size(), q.prepositions().size());
         out.printf("quadruples     %,.0f counted, %,.0f attached to the noun (%.1f%%)%n", q.total(), q.nounAttachments(),

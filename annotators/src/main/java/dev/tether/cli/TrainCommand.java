@@ -2,6 +2,9 @@ package dev.tether.cli;
 
 import dev.tether.attachment.AttachmentFeatureFamily;
 import dev.tether.candidates.HeadCandidateProposer;
+import dev.tether.counts.RawAttachmentCounts;
+import dev.tether.counts.RawAttachmentCountsBuilder;
+import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.io.QuadrupleReader;
 import dev.tether.io.Sha256;
 import dev.tether.treebank.TreebankExampleExtractor;
@@ -9,8 +12,11 @@ import dev.tether.treebank.TreebankExamples;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
+import dev.tether.model.RawWeightChoice;
 import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
 import dev.tether.preprocessing.TreebankTaggerTrainer;
 
 import java.io.IOException;
@@ -31,6 +37,9 @@ import java.util.Set;
  * {@code --no-tagger} trains none, so the shipped OpenNLP tagger stays in use.
  */
 final class TrainCommand implements Command {
+    /** Rounds of re-estimation of the ambiguous raw cases unless --reestimate says otherwise (see README). */
+    static final int RAW_ROUNDS = 1;
+
     @Override
     public String name() {
         return "train";
@@ -38,8 +47,9 @@ final class TrainCommand implements Command {
 
     @Override
     public String usage() {
-        return "train [--quadruples FILE...] [--conllu FILE...] [--corrections SHEET... [--correction-weight W]]"
-                + " [--base MODEL|default] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
+        return "train [--quadruples FILE...] [--conllu FILE...] [--raw PATH...] [--raw-counts FILE...]"
+                + " [--corrections SHEET... [--correction-weight W]] [--base MODEL|default] [--raw-weight W]"
+                + " [--reestimate ROUNDS] [--threads N] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
@@ -50,6 +60,17 @@ final class TrainCommand implements Command {
                 + "                        Tether's tab-separated format with a header\n"
                 + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz): head-choice examples that train the\n"
                 + "                        attachment ranker, and Penn tags (column 5) that train a tagger\n"
+                + "  --raw PATH...         unlabelled text (.txt files, or folders of them): unambiguous attachments\n"
+                + "                        and head-preposition-object co-occurrence, counted through the candidate finder\n"
+                + "  --raw-counts FILE...  raw counts written by the unlabelled attachment counter (merged with --raw)\n"
+                + "  --raw-weight W        how much one raw event counts (default: chosen on development data when\n"
+                + "                        there are labelled sources, else 1)\n"
+                + "  --reestimate ROUNDS   rounds of re-estimation of ambiguous raw cases (default "
+                + RAW_ROUNDS + "; 0: unambiguous only)\n"
+                + "  --thesaurus FILE      a thesaurus from 'tether thesaurus build', stored in the model: where the\n"
+                + "                        back-off has little evidence, nearest neighbours of verb, noun and object decide\n"
+                + "  --save-raw-counts F   also write the merged raw counts to F (atomically)\n"
+                + "  --threads N           threads that count raw text (default 1; the model is the same for any N)\n"
                 + "  --corrections SHEET.. review sheets from 'tether audit --queue', marked by a reviewer\n"
                 + "  --correction-weight W how much one reviewed decision counts (default 1)\n"
                 + "  --base MODEL|default  start from the counts (and ranker, tagger) of an existing model\n"
@@ -65,11 +86,67 @@ final class TrainCommand implements Command {
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1,
-                Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without"),
+                Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without", "raw",
+                        "raw-counts", "raw-weight", "reestimate", "threads", "save-raw-counts", "thesaurus"),
                 Set.of("skip-malformed", "no-ranker", "no-tagger"));
         Path target = Path.of(a.required("out"));
-        if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections")) {
-            throw new UsageException("give at least one training source with --quadruples, --conllu or --corrections");
+        if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections") && !a.has("raw") && !a.has("raw-counts")) {
+            throw new UsageException("give at least one training source with --quadruples, --conllu, --raw, --raw-counts or --corrections");
+        }
+        int threads = positiveInt(a.value("threads", "1"), "--threads");
+        if (threads < 1) throw new UsageException("--threads must be at least 1");
+        int rounds = positiveInt(a.value("reestimate", String.valueOf(RAW_ROUNDS)), "--reestimate");
+        Double rawWeight = null;
+        if (a.has("raw-weight")) {
+            try {
+                rawWeight = Double.parseDouble(a.value("raw-weight", null));
+            } catch (NumberFormatException e) {
+                rawWeight = Double.NaN;
+            }
+            if (!(rawWeight > 0) || rawWeight.isInfinite()) throw new UsageException("--raw-weight must be a positive number");
+        }
+        RawAttachmentCounts raw = null;
+        String rawName = null;
+        if (a.has("raw") || a.has("raw-counts")) {
+            RawAttachmentCountsBuilder merged = new RawAttachmentCountsBuilder();
+            List<String> names = new ArrayList<>();
+            if (a.has("raw")) {
+                List<Path> inputs = new ArrayList<>();
+                for (String f : a.values("raw")) {
+                    Path p = Path.of(f);
+                    if (!Files.exists(p)) throw new IOException(p + " does not exist; give raw text files or folders of .txt files");
+                    inputs.add(p);
+                    names.add(p.getFileName() == null ? f : p.getFileName().toString());
+                }
+                RawTextAttachmentCounting.Summary summary = new RawTextAttachmentCounting(threads).count(inputs);
+                RawAttachmentCounts.Tally t = summary.counts().tally();
+                out.printf("raw text: %,d documents, %,d sentences, %,d tokens in %.1f s (%,.0f tokens/s, %d thread%s)%n",
+                        t.documents(), t.sentences(), t.tokens(), summary.seconds(), t.tokens() / Math.max(1e-9, summary.seconds()),
+                        threads, threads == 1 ? "" : "s");
+                if (summary.skippedCount() > 0 || summary.notDocuments() > 0) {
+                    StringBuilder why = new StringBuilder();
+                    summary.skipped().forEach((k, v) -> why.append(why.length() == 0 ? "" : ", ").append(v.size()).append(' ').append(k.label()));
+                    out.printf("raw text: skipped %,d documents (%s), %,d entries that are not documents%n",
+                            summary.skippedCount(), why.length() == 0 ? "none" : why, summary.notDocuments());
+                    for (List<String> reasons : summary.skipped().values()) for (String r : reasons) out.println("    skipped " + r);
+                }
+                merged.addAll(summary.counts());
+            }
+            for (String f : a.values("raw-counts")) {
+                Path p = Path.of(f);
+                merged.addAll(RawAttachmentCounts.read(p));
+                names.add(p.getFileName().toString());
+            }
+            raw = merged.build();
+            rawName = String.join("+", names);
+            if (a.has("save-raw-counts")) {
+                Path saved = Path.of(a.value("save-raw-counts", null));
+                raw.write(saved);
+                out.println("raw counts written to " + saved + " (give it to --raw-counts to train again without counting)");
+            }
+            RawAttachmentCounts.Tally t = raw.tally();
+            out.printf("raw counts: %,d prepositions with candidates, %,d unambiguous (%.1f%%), %,d ambiguous quadruple configurations%n",
+                    t.prepositions(), t.unambiguous(), 100.0 * t.unambiguous() / Math.max(1, t.prepositions()), t.ambiguousQuadruples());
         }
         double correctionWeight = CorrectionEvents.weight(a.value("correction-weight", null), a.has("corrections"));
         boolean skip = a.has("skip-malformed");
@@ -123,8 +200,39 @@ final class TrainCommand implements Command {
             // The same trees train the coordination ranker.
             trainer.addCoordinationSentences(dev.tether.treebank.ConlluReader.readAll(file));
         }
+        if (raw != null) {
+            double w;
+            if (rawWeight != null) {
+                w = rawWeight;
+                trainer.addRawCounts(raw, rawName, w, rounds);
+            } else {
+                RawWeightChoice.Result choice = trainer.addRawCountsChoosingWeight(raw, rawName, rounds);
+                w = choice.weight();
+                if (choice.quadruples() > 0) {
+                    StringBuilder row = new StringBuilder();
+                    for (int i = 0; i < choice.weights().length; i++) {
+                        row.append(String.format("  %s: %.2f%%", InspectCommand.weight(choice.weights()[i]), 100 * choice.accuracy()[i]));
+                    }
+                    out.printf("raw weight chosen on %d folds of %,d labelled quadruples (held-out backed-off accuracy; without raw %.2f%%):%s%n",
+                            RawWeightChoice.FOLDS, choice.quadruples(), 100 * choice.withoutRaw(), row);
+                }
+            }
+            out.printf("%-40s %,9d prepositions, weight %s, %d round%s of re-estimation%n", rawName, raw.tally().prepositions(),
+                    InspectCommand.weight(w), rounds, rounds == 1 ? "" : "s");
+        }
         int problems = 0;
         for (String f : a.values("corrections")) problems += CorrectionEvents.add(trainer, Path.of(f), correctionWeight, out, err);
+        if (a.has("thesaurus")) {
+            Path file = Path.of(a.value("thesaurus", null));
+            Thesaurus thesaurus = ThesaurusFile.read(file);
+            try {
+                trainer.withThesaurus(thesaurus);
+            } catch (IllegalArgumentException e) {
+                throw new IOException(file + ": " + e.getMessage(), e);
+            }
+            out.printf("thesaurus: %s, %,d words (%s), stored in the model for similarity smoothing%n", file.getFileName(),
+                    thesaurus.size(), thesaurus.settings().weighting() + "/" + thesaurus.settings().measure());
+        }
         if (a.has("no-tagger")) trainer.withTagger(null);
         else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
         long start = System.nanoTime();
@@ -149,6 +257,16 @@ final class TrainCommand implements Command {
         TaggerSection section = tagger.train();
         trainer.withTagger(section);
         out.printf("tagger: %s (%,d bytes)%n", section.description(), section.size());
+    }
+
+    private static int positiveInt(String value, String option) throws UsageException {
+        try {
+            int n = Integer.parseInt(value);
+            if (n >= 0) return n;
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new UsageException(option + " must be a whole number (0 or more), was '" + value + "'");
     }
 
     static String fileSha256(Path file) throws IOException {

@@ -144,6 +144,35 @@ public final class RawTextCounting {
         }
     }
 
+    /** A raw text file's text, or why it is skipped (a reason that names the file). */
+    public record Reading(String text, Skip skip, String reason) {
+    }
+
+    /**
+     * Reads one raw text file as UTF-8 (a leading byte-order mark dropped); a file that cannot be read, holds NUL
+     * bytes, is not valid UTF-8 or is blank is skipped, with the reason.
+     */
+    public static Reading read(Path file) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + ")");
+        }
+        for (byte b : bytes) {
+            if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file");
+        }
+        String text;
+        try {
+            text = Utf8Text.decode(file, bytes);
+        } catch (InputFormatException e) {
+            return new Reading(null, Skip.ENCODING, e.getMessage());
+        }
+        if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
+        if (text.isBlank()) return new Reading(null, Skip.EMPTY, file + ": empty");
+        return new Reading(text, null, null);
+    }
+
     /** One document: tagged, or skipped with a reason that names the file. */
     private static final class Document {
         final Path file;
@@ -159,23 +188,9 @@ public final class RawTextCounting {
         }
 
         static Document of(Path file, RawTextTagger tagger) {
-            byte[] bytes;
-            try {
-                bytes = Files.readAllBytes(file);
-            } catch (IOException e) {
-                return new Document(file, null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + ")");
-            }
-            for (byte b : bytes) {
-                if (b == 0) return new Document(file, null, Skip.BINARY, file + ": holds NUL bytes, a binary file");
-            }
-            String text;
-            try {
-                text = Utf8Text.decode(file, bytes);
-            } catch (InputFormatException e) {
-                return new Document(file, null, Skip.ENCODING, e.getMessage());
-            }
-            if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
-            if (text.isBlank()) return new Document(file, null, Skip.EMPTY, file + ": empty");
+            Reading r = read(file);
+            if (r.skip() != null) return new Document(file, null, r.skip(), r.reason());
+            String text = r.text();
             try {
                 return new Document(file, tagger.tag(text), null, null);
             } catch (AnalysisEngineProcessException | RuntimeException e) {

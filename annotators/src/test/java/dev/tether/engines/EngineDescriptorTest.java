@@ -33,6 +33,8 @@ import dev.tether.coordination.CoordinationResolver;
 import dev.tether.type.CoordinationDecision;
 import dev.tether.attachment.DecisionChecks;
 import dev.tether.candidates.AttachmentCandidateFinder;
+import dev.tether.counts.RawAttachmentCounts;
+import dev.tether.counts.UnlabelledAttachmentCounter;
 import dev.tether.model.LoadedModels;
 import dev.tether.model.ModelHolder;
 import dev.tether.model.SharedModelResource;
@@ -53,6 +55,7 @@ class EngineDescriptorTest {
     static final String COORDINATION = "dev.tether.engines.CoordinationResolver";
     static final String RAW_TEXT_PIPELINE = "dev.tether.engines.RawTextPipeline";
     static final String TAGGED_TEXT_PIPELINE = "dev.tether.engines.TaggedTextPipeline";
+    static final String COUNTER = "dev.tether.engines.UnlabelledAttachmentCounter";
 
     /** Three prepositional phrases: 'on the port engine', 'with a spare', 'from the stores'. */
     /** One coordination: 'bearings and seals', with a premodifier before and a phrase after. */
@@ -247,6 +250,34 @@ class EngineDescriptorTest {
         AnalysisEngineDescription xml = byName(PREPROCESSOR);
         assertAgrees(xml, TextPreprocessor.class);
         assertOptionalModelDependency(xml, TextPreprocessor.RES_MODEL);
+    }
+
+    /** The counter after preprocessor and finder, with plain UIMA: its counts file holds the document's prepositions. */
+    @Test
+    void counterDescriptorRunsWithPlainUimaAndWritesItsCounts(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+        AnalysisEngine preprocessor = UIMAFramework.produceAnalysisEngine(byName(PREPROCESSOR));
+        AnalysisEngine finder = UIMAFramework.produceAnalysisEngine(byName(FINDER));
+        AnalysisEngineDescription counterXml = byName(COUNTER);
+        java.nio.file.Path file = dir.resolve("log.counts");
+        counterXml.getAnalysisEngineMetaData().getConfigurationParameterSettings()
+                .setParameterValue(UnlabelledAttachmentCounter.PARAM_COUNTS_FILE, file.toString());
+        AnalysisEngine counter = UIMAFramework.produceAnalysisEngine(counterXml);
+        CAS cas = counter.newCAS();
+        cas.setDocumentText(GASKET_ENTRY);
+
+        preprocessor.process(cas);
+        finder.process(cas);
+        counter.process(cas);
+        counter.collectionProcessComplete();
+
+        RawAttachmentCounts counts = RawAttachmentCounts.read(file);
+        assertEquals(1, counts.tally().documents());
+        assertEquals(3, counts.tally().prepositions(), "on, with, from");
+    }
+
+    @Test
+    void counterDescriptorAgreesWithItsClass() throws Exception {
+        assertAgrees(byName(COUNTER), UnlabelledAttachmentCounter.class);
     }
 
     @Test

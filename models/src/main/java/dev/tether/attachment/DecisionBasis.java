@@ -15,7 +15,11 @@ public enum DecisionBasis {
     /** Hindle &amp; Rooth (1993) lexical association. */
     LEXICAL_ASSOCIATION,
     /** A baseline rule. */
-    BASELINE;
+    BASELINE,
+    /** Whole quadruples with one word replaced by a distributional neighbour ({@link SimilarityBackedOffScorer}). */
+    SIMILAR_QUADRUPLES,
+    /** The triples, pooled with triples in which one word is replaced by a distributional neighbour. */
+    SIMILAR_TRIPLES;
 
     public String label() {
         return name().toLowerCase(java.util.Locale.ROOT);

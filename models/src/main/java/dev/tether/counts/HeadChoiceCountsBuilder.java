@@ -29,11 +29,16 @@ public final class HeadChoiceCountsBuilder {
 
     /** Counts one candidate's lexical keys: {@code hit} when it was the gold head. */
     public void addLexical(String preposition, String head, int headClass, String object, boolean hit, double weight) {
+        addLexical(preposition, head, headClass, object, hit ? weight : 0, weight);
+    }
+
+    /** Adds {@code hits} and {@code trials} to one candidate's lexical keys (fractional hits come from re-estimation). */
+    public void addLexical(String preposition, String head, int headClass, String object, double hits, double trials) {
         int p = prepositions.add(preposition);
         if (p == lexical.size()) newPreposition();
         int h = words.add(head);
         int o = words.add(object);
-        double hits = hit ? weight : 0;
+        double weight = trials;
         TupleCountsBuilder[] perPart = lexical.get(p);
         perPart[HeadChoiceCounts.Part.HEAD_OBJECT.ordinal()].add(TupleKey.of(h, headClass + 1, o), hits, weight);
         perPart[HeadChoiceCounts.Part.HEAD.ordinal()].add(TupleKey.of(h, headClass + 1), hits, weight);
@@ -48,6 +53,11 @@ public final class HeadChoiceCountsBuilder {
 
     /** Adds all counts of {@code other}. */
     public void addAll(HeadChoiceCounts other) {
+        addAll(other, 1.0);
+    }
+
+    /** Adds all counts of {@code other} multiplied by {@code scale}. */
+    public void addAll(HeadChoiceCounts other, double scale) {
         Vocabulary ow = other.words();
         int[] wordMap = new int[ow.size() + 1];
         for (int i = 1; i <= ow.size(); i++) wordMap[i] = words.add(ow.word(i));
@@ -56,14 +66,27 @@ public final class HeadChoiceCountsBuilder {
             if (p == lexical.size()) newPreposition();
             TupleCountsBuilder[] perPart = lexical.get(p);
             perPart[HeadChoiceCounts.Part.HEAD_OBJECT.ordinal()].addAll(other.lexical(q, HeadChoiceCounts.Part.HEAD_OBJECT),
-                    k -> TupleKey.of(wordMap[TupleKey.part(k, 3, 0)], TupleKey.part(k, 3, 1), wordMap[TupleKey.part(k, 3, 2)]));
+                    k -> TupleKey.of(wordMap[TupleKey.part(k, 3, 0)], TupleKey.part(k, 3, 1), wordMap[TupleKey.part(k, 3, 2)]), scale);
             perPart[HeadChoiceCounts.Part.HEAD.ordinal()].addAll(other.lexical(q, HeadChoiceCounts.Part.HEAD),
-                    k -> TupleKey.of(wordMap[TupleKey.part(k, 2, 0)], TupleKey.part(k, 2, 1)));
+                    k -> TupleKey.of(wordMap[TupleKey.part(k, 2, 0)], TupleKey.part(k, 2, 1)), scale);
             perPart[HeadChoiceCounts.Part.CLASS_OBJECT.ordinal()].addAll(other.lexical(q, HeadChoiceCounts.Part.CLASS_OBJECT),
-                    k -> TupleKey.of(TupleKey.part(k, 2, 0), wordMap[TupleKey.part(k, 2, 1)]));
-            perPart[HeadChoiceCounts.Part.CLASS.ordinal()].addAll(other.lexical(q, HeadChoiceCounts.Part.CLASS), k -> k);
+                    k -> TupleKey.of(TupleKey.part(k, 2, 0), wordMap[TupleKey.part(k, 2, 1)]), scale);
+            perPart[HeadChoiceCounts.Part.CLASS.ordinal()].addAll(other.lexical(q, HeadChoiceCounts.Part.CLASS), k -> k, scale);
         }
-        structure.addAll(other.structure(), k -> k);
+        structure.addAll(other.structure(), k -> k, scale);
+    }
+
+    /** The counts with words and prepositions numbered in sorted order; see {@link QuadrupleCountsBuilder#buildSorted}. */
+    public HeadChoiceCounts buildSorted() {
+        HeadChoiceCounts arrival = build();
+        HeadChoiceCountsBuilder sorted = new HeadChoiceCountsBuilder();
+        for (String w : QuadrupleCountsBuilder.sortedWords(arrival.words())) sorted.words.add(w);
+        for (String p : QuadrupleCountsBuilder.sortedWords(arrival.prepositions())) {
+            sorted.prepositions.add(p);
+            sorted.newPreposition();
+        }
+        sorted.addAll(arrival);
+        return sorted.build();
     }
 
     public HeadChoiceCounts build() {

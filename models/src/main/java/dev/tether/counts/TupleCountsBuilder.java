@@ -7,10 +7,11 @@ import java.util.function.LongUnaryOperator;
 
 /** Accumulates counts for a {@link TupleCounts}. Adding is commutative and associative, so shards can be counted apart and added. */
 public final class TupleCountsBuilder {
-    private final TLongIntHashMap slots = new TLongIntHashMap(1024, 0.5f, Long.MIN_VALUE, -1);
-    private long[] keys = new long[1024];
-    private double[] hits = new double[1024];
-    private double[] trials = new double[1024];
+    // Small at first: a model keeps several tables per preposition, and raw text brings hundreds of rare ones.
+    private final TLongIntHashMap slots = new TLongIntHashMap(16, 0.5f, Long.MIN_VALUE, -1);
+    private long[] keys = new long[16];
+    private double[] hits = new double[16];
+    private double[] trials = new double[16];
     private int size;
 
     public void add(long key, double hit, double trial) {
@@ -28,6 +29,17 @@ public final class TupleCountsBuilder {
     /** Adds every entry of {@code other}, with its keys rewritten by {@code keyMap} (for a different vocabulary). */
     public void addAll(TupleCounts other, LongUnaryOperator keyMap) {
         for (int i = 0; i < other.size(); i++) add(keyMap.applyAsLong(other.key(i)), other.hitsAt(i), other.trialsAt(i));
+    }
+
+    /** Adds every entry of {@code other} times {@code scale}, keys rewritten by {@code keyMap}. */
+    public void addAll(TupleCounts other, LongUnaryOperator keyMap, double scale) {
+        if (scale == 1.0) {
+            addAll(other, keyMap);
+            return;
+        }
+        for (int i = 0; i < other.size(); i++) {
+            add(keyMap.applyAsLong(other.key(i)), other.hitsAt(i) * scale, other.trialsAt(i) * scale);
+        }
     }
 
     public int size() {

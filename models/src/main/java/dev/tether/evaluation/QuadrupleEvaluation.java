@@ -17,6 +17,7 @@ public final class QuadrupleEvaluation {
     private final Map<DecisionBasis, Accuracy> byBasis = new EnumMap<>(DecisionBasis.class);
     private final long[][] confusion = new long[2][2];
     private long unknownPrepositions;
+    private final Map<DecisionBasis, Accuracy[]> smoothingByLevel = new EnumMap<>(DecisionBasis.class);
 
     QuadrupleEvaluation(String mainScorer) {
         this.mainScorer = mainScorer;
@@ -30,6 +31,19 @@ public final class QuadrupleEvaluation {
         byBasis.computeIfAbsent(basis, b -> new Accuracy()).add(gold == chosen);
         confusion[gold.ordinal()][chosen.ordinal()]++;
     }
+
+    /** With a thesaurus: the level the plain back-off used, whether it was right, and whether the smoothed one was. */
+    void recordSmoothing(DecisionBasis plainLevel, boolean plainRight, boolean smoothedRight) {
+        Accuracy[] a = smoothingByLevel.computeIfAbsent(plainLevel, b -> new Accuracy[] {new Accuracy(), new Accuracy()});
+        a[0].add(plainRight);
+        a[1].add(smoothedRight);
+    }
+
+    /**
+     * For a model with a thesaurus, per level of the plain back-off: its accuracy ([0]) and the smoothed scorer's on
+     * the same items ([1]). Empty without a thesaurus.
+     */
+    public Map<DecisionBasis, Accuracy[]> smoothingByLevel() { return smoothingByLevel; }
 
     void recordUnknownPreposition() {
         unknownPrepositions++;

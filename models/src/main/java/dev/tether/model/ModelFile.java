@@ -7,6 +7,9 @@ import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.AtomicFileWriter;
 import dev.tether.io.ChecksummedFile;
 import dev.tether.io.Sha256;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
+import dev.tether.similarity.ThesaurusFormatException;
 
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
@@ -39,6 +42,8 @@ import java.util.zip.InflaterInputStream;
  * </pre>
  * Sections are {@code info} (normalizer version and sources), {@code quadruples} (the quadruple counts),
  * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
+ * {@code source-weights} (how much each source's events count, when some weight is not 1), {@code thesaurus} (a whole
+ * thesaurus file, for similarity smoothing),
  * {@code attachment-ranker} (its own version, feature families, feature keys and weights), {@code tagger} (a
  * part-of-speech tagger, see {@link TaggerSection}, with a version of its own) and {@code coordination-ranker}
  * ({@link CoordinationRanker}: its version, families, coordination counts and two weight sets; a model without it, or
@@ -55,6 +60,10 @@ public final class ModelFile {
     private static final String HEAD_CHOICE = "head-choice";
     private static final String ATTACHMENT_RANKER = "attachment-ranker";
     private static final String TAGGER = "tagger";
+    /** Optional: a whole thesaurus file (its own header, version and checksum), for similarity smoothing. */
+    private static final String THESAURUS = "thesaurus";
+    /** Optional: each source's weight, in source order; written only when some weight is not 1. */
+    private static final String SOURCE_WEIGHTS = "source-weights";
     private static final String COORDINATION_RANKER = "coordination-ranker";
     private static final java.util.logging.Logger LOG = java.util.logging.Logger.getLogger(ModelFile.class.getName());
 
@@ -64,7 +73,8 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.coordinationRanker().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null),
+                model.coordinationRanker().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -88,21 +98,32 @@ public final class ModelFile {
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
-        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus) throws IOException {
+        return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus));
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
-                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
                          CoordinationRanker coordination) throws IOException {
-        Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger);
+        Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus);
         if (coordination != null) sections.put(COORDINATION_RANKER, section(out -> CoordinationRanker.write(coordination, out)));
         return pack(sections);
     }
 
-    /** The named sections of a model, in file order. */
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
+        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
+    }
+
     static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger) throws IOException {
+        return sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, null);
+    }
+
+    /** The named sections of a model, in file order. */
+    static Map<String, byte[]> sections(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                                        HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger,
+                                        Thesaurus thesaurus) throws IOException {
         Map<String, byte[]> sections = new LinkedHashMap<>();
         sections.put(INFO, section(out -> {
             out.writeUTF(normalizerVersion);
@@ -115,12 +136,21 @@ public final class ModelFile {
                 out.writeUTF(s.sha256());
             }
         }));
+        boolean weighted = false;
+        for (ModelSource s : sources) weighted |= s.weight() != 1.0;
+        if (weighted) {
+            sections.put(SOURCE_WEIGHTS, section(out -> {
+                out.writeInt(sources.size());
+                for (ModelSource s : sources) out.writeDouble(s.weight());
+            }));
+        }
         sections.put(QUADRUPLES, section(quadruples::write));
         sections.put(HEAD_CHOICE, section(headChoice::write));
         if (ranker != null) {
             sections.put(ATTACHMENT_RANKER, section(out -> AttachmentRanker.write(ranker.weights(), ranker.families(), out)));
         }
         if (tagger != null) sections.put(TAGGER, section(tagger::write));
+        if (thesaurus != null) sections.put(THESAURUS, ThesaurusFile.toBytes(thesaurus));
         return sections;
     }
 
@@ -159,6 +189,15 @@ public final class ModelFile {
             for (int i = 0; i < n; i++) {
                 sources.add(new ModelSource(in.readUTF(), in.readUTF(), in.readLong(), in.readLong(), in.readUTF()));
             }
+            byte[] weights = sections.get(SOURCE_WEIGHTS);
+            if (weights != null) {
+                DataInputStream w = new DataInputStream(new ByteArrayInputStream(weights));
+                if (w.readInt() != sources.size()) throw new IOException("source weights do not match the sources");
+                for (int i = 0; i < sources.size(); i++) {
+                    ModelSource s = sources.get(i);
+                    sources.set(i, new ModelSource(s.name(), s.kind(), s.items(), s.skipped(), s.sha256(), w.readDouble()));
+                }
+            }
             QuadrupleCounts counts = QuadrupleCounts.read(new DataInputStream(new ByteArrayInputStream(quads)));
             HeadChoiceCounts headChoice = HeadChoiceCounts.read(new DataInputStream(new ByteArrayInputStream(heads)));
             AttachmentRanker ranker = null;
@@ -176,6 +215,15 @@ public final class ModelFile {
             }
             byte[] tag = sections.get(TAGGER);
             TaggerSection tagger = tag == null ? null : TaggerSection.read(tag, name);
+            byte[] thesaurusBytes = sections.get(THESAURUS);
+            Thesaurus thesaurus = null;
+            if (thesaurusBytes != null) {
+                try {
+                    thesaurus = ThesaurusFile.fromBytes(thesaurusBytes, "the thesaurus section of " + name);
+                } catch (ThesaurusFormatException e) {
+                    throw new ModelFormatException(e.getMessage() + " Retrain the model with this version ('tether train --thesaurus').", e);
+                }
+            }
             CoordinationRanker coordination = null;
             byte[] coordinationBytes = sections.get(COORDINATION_RANKER);
             if (coordinationBytes != null) {
@@ -190,7 +238,7 @@ public final class ModelFile {
                             + "with 'tether train --conllu' to get them.");
                 }
             }
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, coordination,
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus, coordination,
                     java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;

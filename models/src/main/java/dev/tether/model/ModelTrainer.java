@@ -1,5 +1,6 @@
 package dev.tether.model;
 
+import dev.tether.attachment.AmbiguousReestimation;
 import dev.tether.attachment.AttachmentExample;
 import dev.tether.attachment.AttachmentFeatureExtractor;
 import dev.tether.attachment.AttachmentFeatureFamily;
@@ -28,8 +29,10 @@ import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.counts.QuadrupleCountsBuilder;
+import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.ranking.RankerModel;
+import dev.tether.similarity.Thesaurus;
 import dev.tether.ranking.RankerTrainer;
 import dev.tether.treebank.TreebankExamples;
 import dev.tether.vocabulary.WordNormalizer;
@@ -66,6 +69,8 @@ public final class ModelTrainer {
     private final List<TetherModel> baseModels = new ArrayList<>();
     private final List<LabelledQuadruple> fixedQuadruples = new ArrayList<>();
     private final List<AttachmentExample> examples = new ArrayList<>();
+    private final List<AmbiguousReestimation.Estimate> rawEstimates = new ArrayList<>();
+    private final List<Double> rawWeights = new ArrayList<>();
     private final List<LabelledQuadruple> exampleQuadruples = new ArrayList<>();
     private Set<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
     private RankerTrainer rankerTrainer = new RankerTrainer();
@@ -82,6 +87,7 @@ public final class ModelTrainer {
             new dev.tether.ranking.Lbfgs(400, 1e-7));
     /** L2 strengths tried for the coordination ranker. */
     public static final double[] COORDINATION_STRENGTHS = {0.1, 0.3, 1, 3};
+    private Thesaurus thesaurus;
 
     /** Counts every quadruple of {@code set}. */
     public ModelTrainer addQuadruples(QuadrupleSet set) {
@@ -165,8 +171,47 @@ public final class ModelTrainer {
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
         if (tagger == null) tagger = model.tagger().orElse(null);
+        if (thesaurus == null) thesaurus = model.thesaurus().orElse(null);
         sources.add(new ModelSource(name, "model", (long) model.quadruples().total(), 0, model.id()));
         return this;
+    }
+
+    /**
+     * Adds what unlabelled text taught ({@link RawAttachmentCounts}, merged from any number of documents or shards):
+     * the unambiguous attachments and the co-occurrence counts, and after {@code rounds} rounds of re-estimation
+     * ({@link AmbiguousReestimation}) the ambiguous configurations; every count times {@code weight}, how much one
+     * raw event counts against one labelled one (chosen on development data, see {@code RawWeightChoice}). Recorded
+     * as a source of kind {@code raw} with its weight; {@code sha256} identifies the counts.
+     */
+    public ModelTrainer addRawCounts(RawAttachmentCounts raw, String name, double weight, int rounds) {
+        if (!(weight > 0) || Double.isInfinite(weight)) {
+            throw new IllegalArgumentException("the weight of raw counts must be a positive number, was " + weight);
+        }
+        AmbiguousReestimation.Estimate estimate = AmbiguousReestimation.of(raw, rounds);
+        quadruples.addAll(estimate.quadruples(), weight);
+        headChoice.addAll(estimate.headChoice(), weight);
+        rawEstimates.add(estimate);
+        rawWeights.add(weight);
+        sources.add(new ModelSource(name, "raw", raw.tally().prepositions(), raw.tally().skippedDocuments(),
+                dev.tether.io.Sha256.hex(raw.toBytes()), weight));
+        return this;
+    }
+
+    /**
+     * Like {@link #addRawCounts}, with the weight chosen on folds of the labelled quadruples added so far (given and
+     * read off treebanks; see {@link RawWeightChoice}); with none, the weight is 1. Add the labelled sources first.
+     */
+    public RawWeightChoice.Result addRawCountsChoosingWeight(RawAttachmentCounts raw, String name, int rounds) {
+        List<LabelledQuadruple> labelled = new ArrayList<>(fixedQuadruples);
+        labelled.addAll(exampleQuadruples);
+        RawWeightChoice.Result choice;
+        if (labelled.isEmpty()) {
+            choice = new RawWeightChoice.Result(1.0, new double[0], new double[0], 0, 0);
+        } else {
+            choice = RawWeightChoice.choose(labelled, baseModels, AmbiguousReestimation.of(raw, rounds).quadruples(), normalizer);
+        }
+        addRawCounts(raw, name, choice.weight(), rounds);
+        return choice;
     }
 
     /**
@@ -201,8 +246,9 @@ public final class ModelTrainer {
     }
 
     /**
-     * A thesaurus whose similarities feed the coordination ranker's similarity and composition features at training
-     * (null: none, those features stay off). The model file does not store it; give the same thesaurus at run time.
+     * A thesaurus whose similarities feed the coordination ranker's similarity and composition features at training,
+     * in place of the thesaurus the model carries ({@code train --thesaurus}, which is used when this is not set);
+     * with neither, those features stay off. At run time the ranker reads the model's own thesaurus.
      */
     public ModelTrainer coordinationThesaurus(Thesaurus thesaurus) {
         this.coordinationThesaurus = thesaurus;
@@ -237,6 +283,19 @@ public final class ModelTrainer {
         return this;
     }
 
+    /**
+     * The distributional thesaurus the model will carry for similarity smoothing ({@link TetherModel#thesaurus()});
+     * it replaces one taken over from a base model. {@code null}: none.
+     */
+    public ModelTrainer withThesaurus(Thesaurus thesaurus) {
+        if (thesaurus != null && !thesaurus.normalizerVersion().equals(WordNormalizer.VERSION)) {
+            throw new IllegalArgumentException("the thesaurus keys its words with normalization " + thesaurus.normalizerVersion()
+                    + ", this build uses " + WordNormalizer.VERSION + "; build it again");
+        }
+        this.thesaurus = thesaurus;
+        return this;
+    }
+
     /** Whether the model will carry a tagger (one set here or taken over from a base model). */
     public boolean hasTagger() {
         return tagger != null;
@@ -267,8 +326,8 @@ public final class ModelTrainer {
             }
         }
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, coordination);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, coordination,
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination,
                     ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
@@ -288,7 +347,7 @@ public final class ModelTrainer {
         CoordinationCounts all = builder.build();
         CoordinationFeatureExtractor[] extractors = new CoordinationFeatureExtractor[k];
         for (int f = 0; f < k; f++) {
-            extractors[f] = new CoordinationFeatureExtractor(all.without(builder.fold(f, all)), coordinationThesaurus,
+            extractors[f] = new CoordinationFeatureExtractor(all.without(builder.fold(f, all)), coordinationThesaurus(),
                     normalizer, coordinationFamilies);
         }
         CoordinationExampleExtractor examples = new CoordinationExampleExtractor(new ConjunctCandidateProposer());
@@ -298,7 +357,12 @@ public final class ModelTrainer {
         }
         RankerModel[] weights = events.train(coordinationTrainer);
         if (weights == null) return null;
-        return new CoordinationRanker(weights[0], weights[1], coordinationFamilies, all, coordinationThesaurus);
+        return new CoordinationRanker(weights[0], weights[1], coordinationFamilies, all, coordinationThesaurus());
+    }
+
+    /** The thesaurus of the coordination features: the one given for them, else the one the model will carry. */
+    private Thesaurus coordinationThesaurus() {
+        return coordinationThesaurus != null ? coordinationThesaurus : thesaurus;
     }
 
     private RankerModel trainRanker(HeadChoiceCounts lexicon) {
@@ -318,6 +382,10 @@ public final class ModelTrainer {
             for (TetherModel base : baseModels) {
                 q4.addAll(base.quadruples());
                 hc.addAll(base.headChoice());
+            }
+            for (int r = 0; r < rawEstimates.size(); r++) {
+                q4.addAll(rawEstimates.get(r).quadruples(), rawWeights.get(r));
+                hc.addAll(rawEstimates.get(r).headChoice(), rawWeights.get(r));
             }
             for (LabelledQuadruple q : fixedQuadruples) countQuadruple(q, q4, hc);
             for (int j = 0; j < n; j++) if (fold[j] != f) countExample(examples.get(j), hc);

@@ -60,6 +60,16 @@ public final class ThesaurusFile {
         }
     }
 
+    /** The bytes of a thesaurus file holding {@code t} (what {@link #write} writes; a model embeds them). */
+    public static byte[] toBytes(Thesaurus t) throws IOException {
+        return encode(t);
+    }
+
+    /** Decodes {@link #toBytes}; {@code name} names the bytes in messages. */
+    public static Thesaurus fromBytes(byte[] bytes, String name) throws ThesaurusFormatException {
+        return decode(bytes, name);
+    }
+
     static byte[] encode(Thesaurus t) throws IOException {
         ByteArrayOutputStream payload = new ByteArrayOutputStream();
         Deflater deflater = new Deflater(Deflater.BEST_COMPRESSION);

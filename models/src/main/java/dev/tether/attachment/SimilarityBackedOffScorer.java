@@ -1,0 +1,202 @@
+package dev.tether.attachment;
+
+import dev.tether.candidates.HeadClass;
+import dev.tether.counts.QuadrupleCounts;
+import dev.tether.counts.SubTuple;
+import dev.tether.counts.TupleCounts;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.vocabulary.Vocabulary;
+import dev.tether.vocabulary.WordNormalizer;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The back-off of {@link BackedOffScorer}, smoothed by distributional similarity where it would fall to a level with
+ * little evidence (Dagan, Lee &amp; Pereira 1999; Zhao &amp; Lin 2004). When the whole quadruple was never seen and the
+ * pooled triples hold fewer than {@link #MIN_TRIPLE_TRIALS} cases, the scorer replaces one word at a time — the verb,
+ * the first noun or the object — by each of its {@link #NEIGHBOURS} nearest neighbours in the thesaurus (same class)
+ * and reads the counts of the altered quadruple, every case weighted by the neighbour's similarity:
+ * <ol>
+ *   <li>{@link DecisionBasis#SIMILAR_QUADRUPLES}: whole quadruples with one word replaced, when any was seen;</li>
+ *   <li>{@link DecisionBasis#SIMILAR_TRIPLES}: else the triples, pooled with the triples that contain a replaced word;</li>
+ *   <li>else the plain back-off (pairs, preposition, default).</li>
+ * </ol>
+ * A word the counts never saw but the thesaurus knows still finds its neighbours, which is where smoothing helps most.
+ * {@link #explain} names the neighbours that carried the most weight. Immutable and thread-safe; the neighbour lists
+ * are mapped to count ids once, in the constructor.
+ */
+public final class SimilarityBackedOffScorer implements QuadrupleScorer {
+    /** Neighbours consulted per word (measured on the quadruple devset; see README). */
+    public static final int NEIGHBOURS = 10;
+    /** Fewer pooled triple cases than this count as little evidence (measured on the quadruple devset; see README). */
+    public static final double MIN_TRIPLE_TRIALS = 2;
+
+    private static final SubTuple[] TRIPLES = {SubTuple.VERB_NOUN1, SubTuple.VERB_NOUN2, SubTuple.NOUN1_NOUN2};
+
+    private final QuadrupleCounts counts;
+    private final Thesaurus thesaurus;
+    private final WordNormalizer normalizer;
+    private final BackedOffScorer plain;
+    private final int neighbours;
+    private final double minTripleTrials;
+
+    public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer) {
+        this(counts, thesaurus, normalizer, NEIGHBOURS, MIN_TRIPLE_TRIALS);
+    }
+
+    public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer,
+                                     int neighbours, double minTripleTrials) {
+        this.counts = counts;
+        this.thesaurus = thesaurus;
+        this.normalizer = normalizer;
+        this.plain = new BackedOffScorer(counts);
+        this.neighbours = neighbours;
+        this.minTripleTrials = minTripleTrials;
+    }
+
+    @Override
+    public String name() {
+        return "similarity-backed-off";
+    }
+
+    /** Decides a quadruple of count ids; words the counts never saw (id 0) cannot be looked up in the thesaurus. */
+    @Override
+    public QuadrupleDecision decide(int v, int n1, int p, int n2) {
+        Vocabulary w = counts.words();
+        return decideKeys(v, n1, p, n2, v > 0 ? w.word(v) : null, n1 > 0 ? w.word(n1) : null, n2 > 0 ? w.word(n2) : null, null);
+    }
+
+    /** Decides a quadruple given as words in the text (normalized here). */
+    public QuadrupleDecision decide(Quadruple q) {
+        return decide(q, null);
+    }
+
+    /** Like {@link #decide(Quadruple)}; fills {@code deciders} (when not null) with the neighbours that decided it. */
+    public QuadrupleDecision decide(Quadruple q, List<String> deciders) {
+        String v = normalizer.verb(q.verb());
+        String n1 = normalizer.noun(q.noun1());
+        String n2 = normalizer.noun(q.noun2());
+        Vocabulary w = counts.words();
+        return decideKeys(w.id(v), w.id(n1), counts.prepositions().id(normalizer.preposition(q.preposition())), w.id(n2),
+                v, n1, n2, deciders);
+    }
+
+    /** The neighbours that decided {@code q}, heaviest first, as "slot word→neighbour (weight)"; empty when none did. */
+    public List<String> explain(Quadruple q) {
+        List<String> deciders = new ArrayList<>();
+        decide(q, deciders);
+        return deciders;
+    }
+
+    private QuadrupleDecision decideKeys(int v, int n1, int p, int n2, String vk, String n1k, String n2k, List<String> deciders) {
+        QuadrupleDecision base = plain.decide(v, n1, p, n2);
+        if (p <= 0 || base.basis() == DecisionBasis.QUADRUPLE
+                || (base.basis() == DecisionBasis.TRIPLES && base.count() >= minTripleTrials)) {
+            return base;
+        }
+        double[] quad = new double[2];
+        double[] triples = new double[2];
+        if (base.basis() == DecisionBasis.TRIPLES) {
+            triples[0] = base.nounCount();
+            triples[1] = base.count();
+        }
+        List<Contribution> contributions = deciders == null ? null : new ArrayList<>();
+        substitute(0, HeadClass.VERB, vk, v, n1, p, n2, quad, triples, contributions);
+        substitute(1, HeadClass.NOUN, n1k, v, n1, p, n2, quad, triples, contributions);
+        substitute(2, HeadClass.NOUN, n2k, v, n1, p, n2, quad, triples, contributions);
+        QuadrupleDecision d;
+        if (quad[1] > 0) d = decision(quad, DecisionBasis.SIMILAR_QUADRUPLES);
+        else if (triples[1] > 0 && triples[1] > (base.basis() == DecisionBasis.TRIPLES ? base.count() : 0)) {
+            d = decision(triples, DecisionBasis.SIMILAR_TRIPLES);
+        } else return base;
+        if (contributions != null) {
+            boolean quadLevel = d.basis() == DecisionBasis.SIMILAR_QUADRUPLES;
+            contributions.removeIf(c -> quadLevel ? c.quadWeight <= 0 : c.tripleWeight <= 0);
+            contributions.sort((a, b) -> Double.compare(quadLevel ? b.quadWeight : b.tripleWeight, quadLevel ? a.quadWeight : a.tripleWeight));
+            for (int i = 0; i < Math.min(3, contributions.size()); i++) {
+                Contribution c = contributions.get(i);
+                deciders.add(c.slot + " " + c.word + "\u2192" + c.neighbour + String.format(" (%.2f)", quadLevel ? c.quadWeight : c.tripleWeight));
+            }
+        }
+        return d;
+    }
+
+    private static final String[] SLOTS = {"verb", "noun", "object"};
+
+
+    private static final class Contribution {
+        final String slot, word, neighbour;
+        double quadWeight, tripleWeight;
+
+        Contribution(String slot, String word, String neighbour) {
+            this.slot = slot;
+            this.word = word;
+            this.neighbour = neighbour;
+        }
+    }
+
+    /** Adds the evidence of the quadruple with word {@code slot} replaced by each of its neighbours. */
+    private void substitute(int slot, HeadClass wordClass, String key, int v, int n1, int p, int n2,
+                            double[] quad, double[] triples, List<Contribution> contributions) {
+        if (key == null) return;
+        int t = thesaurus.id(wordClass, key);
+        if (t == Thesaurus.UNKNOWN) return;
+        int k = Math.min(neighbours, thesaurus.neighbourCount(t));
+        for (int i = 0; i < k; i++) {
+            int nt = thesaurus.neighbourId(t, i);
+            double s = thesaurus.neighbourScore(t, i);
+            if (!(s > 0)) continue;
+            int id = counts.words().id(thesaurus.key(nt));
+            if (id <= 0) continue;
+            int sv = slot == 0 ? id : v, sn1 = slot == 1 ? id : n1, sn2 = slot == 2 ? id : n2;
+            double qw = 0, tw = 0;
+            if (sv > 0 && sn1 > 0 && sn2 > 0) {
+                long e = counts.table(p, SubTuple.VERB_NOUN1_NOUN2).find(SubTuple.VERB_NOUN1_NOUN2.key(sv, sn1, sn2));
+                if (e != TupleCounts.ABSENT) {
+                    quad[0] += s * TupleCounts.hitsIn(e);
+                    quad[1] += s * TupleCounts.trialsIn(e);
+                    qw = s * TupleCounts.trialsIn(e);
+                }
+            }
+            for (SubTuple part : TRIPLES) {
+                if (!contains(part, slot)) continue;
+                int a = sv, b = sn1, c = sn2;
+                if (!known(part, a, b, c)) continue;
+                long e = counts.table(p, part).find(part.key(a, b, c));
+                if (e != TupleCounts.ABSENT) {
+                    triples[0] += s * TupleCounts.hitsIn(e);
+                    triples[1] += s * TupleCounts.trialsIn(e);
+                    tw += s * TupleCounts.trialsIn(e);
+                }
+            }
+            if (contributions != null && (qw > 0 || tw > 0)) {
+                Contribution c = new Contribution(SLOTS[slot], key, thesaurus.key(nt));
+                c.quadWeight = qw;
+                c.tripleWeight = tw;
+                contributions.add(c);
+            }
+        }
+    }
+
+    private static boolean contains(SubTuple part, int slot) {
+        switch (part) {
+            case VERB_NOUN1: return slot == 0 || slot == 1;
+            case VERB_NOUN2: return slot == 0 || slot == 2;
+            default: return slot == 1 || slot == 2;
+        }
+    }
+
+    private static boolean known(SubTuple part, int v, int n1, int n2) {
+        switch (part) {
+            case VERB_NOUN1: return v > 0 && n1 > 0;
+            case VERB_NOUN2: return v > 0 && n2 > 0;
+            default: return n1 > 0 && n2 > 0;
+        }
+    }
+
+    private static QuadrupleDecision decision(double[] e, DecisionBasis basis) {
+        double pn = e[0] / e[1];
+        return new QuadrupleDecision(pn >= 0.5 ? AttachmentSite.NOUN : AttachmentSite.VERB, pn, basis, e[0], e[1], pn);
+    }
+}
