@@ -222,6 +222,8 @@ final class TrainCommand implements Command {
             trainer.addTreebank(t, file.getFileName().toString(), fileSha256(file));
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
+            // The same trees train the coordination ranker.
+            trainer.addCoordinationSentences(dev.tether.treebank.ConlluReader.readAll(file));
         }
         if (raw != null) {
             double w;
