@@ -48,4 +48,10 @@ final class AuditRuns {
     static long lines(Path file) throws IOException {
         return Files.readAllLines(file).stream().filter(l -> !l.isBlank()).count();
     }
+
+    /** Ledger lines of one kind ({@code attachment} or {@code coordination}). */
+    static long lines(Path file, String kind) throws IOException {
+        String field = "\"kind\":\"" + kind + "\"";
+        return Files.readAllLines(file).stream().filter(l -> l.contains(field)).count();
+    }
 }

@@ -87,7 +87,11 @@ class ReportInBrowserTest {
     void theBrowserDrawsTheArcsAndTheTable() throws Exception {
         String doc = AuditRuns.DEMO[0];
         Path page = page(doc);
-        long decisions = lines(run.resolve(doc + ".ledger.jsonl"));
+        Path ledger = run.resolve(doc + ".ledger.jsonl");
+        long decisions = lines(ledger);
+        long attachments = lines(ledger, "attachment");
+        long coordinations = lines(ledger, "coordination");
+        assertEquals(decisions, attachments + coordinations, "every ledger line is an attachment or a coordination");
 
         Path png = dir.resolve("page.png");
         chromium(page, "--screenshot=" + png, "--hide-scrollbars");
@@ -97,7 +101,9 @@ class ReportInBrowserTest {
 
         String dom = chromium(page, "--dump-dom");
         assertTrue(dom.contains("<svg class=\"sentence\""), "sentences are SVG in the browser's DOM");
-        assertEquals(decisions, count(dom, "<path class=\"arc chosen\""), "every chosen arc is in the DOM");
+        assertEquals(attachments, count(dom, "<path class=\"arc chosen\""), "every chosen attachment arc is in the DOM");
+        assertTrue(count(dom, "<path class=\"arc conjunct\"") >= 2 * coordinations,
+                "every coordination draws an arc to each of its (at least two) conjuncts");
         assertTrue(count(dom, "<path class=\"arc runner-up\"") > 0, "runner-up arcs are in the DOM");
         assertTrue(dom.contains("<table class=\"decisions\">"), "the decision table is in the DOM");
         assertEquals(decisions, count(dom, "<tr id=\"d\\d+\""), "a row per decision");
