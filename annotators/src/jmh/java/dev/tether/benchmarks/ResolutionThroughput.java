@@ -1,5 +1,9 @@
 package dev.tether.benchmarks;
 
+import dev.tether.attachment.AttachmentResolver;
+import dev.tether.candidates.AttachmentCandidateFinder;
+import dev.tether.type.Conjunct;
+import dev.tether.type.CoordinationDecision;
 import dev.tether.pipeline.TetherPipeline;
 import dev.tether.preprocessing.TextPreprocessor;
 import dev.tether.treebank.ConlluReader;
@@ -33,8 +37,8 @@ import java.util.concurrent.TimeUnit;
 /**
  * Time to run, on one thread, over the same documents: the candidate finder plus the attachment resolver alone on
  * CASes tagged beforehand ({@link #finderAndResolver}), the same with the count-based score in place of the learned
- * ranker ({@link #finderAndCountScore}), and the whole standalone pipeline from raw text
- * ({@link #wholePipeline}). Documents are the {@code # text} sentences of a UD English EWT file, 20 per document.
+ * ranker ({@link #finderAndCountScore}), the coordination resolver alone on the same CASes
+ * ({@link #coordinationResolver}), and the whole standalone pipeline from raw text ({@link #wholePipeline}). Documents are the {@code # text} sentences of a UD English EWT file, 20 per document.
  * Each invocation processes every document once; {@link ResolutionThroughputMain} turns the times into tokens per
  * second and the finder-plus-resolver share of the whole.
  */
@@ -51,6 +55,7 @@ public class ResolutionThroughput {
     private JCas scratch;
     private AnalysisEngine resolution;
     private AnalysisEngine countResolution;
+    private AnalysisEngine coordination;
     private AnalysisEngine whole;
     /** Tokens over all documents, as the built-in preprocessing tokenizes them. */
     public long tokens;
@@ -72,8 +77,13 @@ public class ResolutionThroughput {
         }
         if (inDoc > 0) texts.add(doc.toString());
         AnalysisEngine preprocessor = AnalysisEngineFactory.createEngine(TextPreprocessor.class);
-        resolution = AnalysisEngineFactory.createEngine(TetherPipeline.resolution("default"));
-        countResolution = AnalysisEngineFactory.createEngine(TetherPipeline.resolution("default", "counts"));
+        resolution = AnalysisEngineFactory.createEngine(AnalysisEngineFactory.createEngineDescription(
+                AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class)));
+        countResolution = AnalysisEngineFactory.createEngine(AnalysisEngineFactory.createEngineDescription(
+                AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_SCORER, "counts")));
+        coordination = AnalysisEngineFactory.createEngine(TetherPipeline.coordination("default"));
         whole = TetherPipeline.createForRawText("default");
         for (String text : texts) {
             JCas jcas = preprocessor.newJCas();
@@ -103,6 +113,18 @@ public class ResolutionThroughput {
         return resolveAll(countResolution);
     }
 
+    /** The coordination resolver alone (its own candidates, ranking and evidence) on the same tagged CASes. */
+    @Benchmark
+    public int coordinationResolver() throws Exception {
+        int decisions = 0;
+        for (JCas jcas : tagged) {
+            removeOutputs(jcas);
+            coordination.process(jcas);
+            decisions += JCasUtil.select(jcas, CoordinationDecision.class).size();
+        }
+        return decisions;
+    }
+
     private int resolveAll(AnalysisEngine engine) throws Exception {
         int decisions = 0;
         for (JCas jcas : tagged) {
@@ -127,7 +149,8 @@ public class ResolutionThroughput {
     }
 
     private static void removeOutputs(JCas jcas) {
-        for (Class<? extends Annotation> type : List.of(AttachmentDecision.class, AttachmentAmbiguity.class, QuadrupleCandidate.class)) {
+        for (Class<? extends Annotation> type : List.of(AttachmentDecision.class, AttachmentAmbiguity.class, QuadrupleCandidate.class,
+                CoordinationDecision.class, Conjunct.class)) {
             for (Annotation a : new ArrayList<>(JCasUtil.select(jcas, type))) a.removeFromIndexes();
         }
     }
@@ -136,6 +159,7 @@ public class ResolutionThroughput {
     public void tearDown() {
         resolution.destroy();
         countResolution.destroy();
+        coordination.destroy();
         whole.destroy();
     }
 }

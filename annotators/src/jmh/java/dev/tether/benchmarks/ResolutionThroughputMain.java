@@ -26,11 +26,14 @@ public final class ResolutionThroughputMain {
         double resolutionMs = ms.getOrDefault("finderAndResolver", Double.NaN);
         double wholeMs = ms.getOrDefault("wholePipeline", Double.NaN);
         double countMs = ms.getOrDefault("finderAndCountScore", Double.NaN);
+        double coordinationMs = ms.getOrDefault("coordinationResolver", Double.NaN);
         long tokens = countTokens(args);
         System.out.printf("%ntokens per pass: %,d%n", tokens);
         System.out.printf("finder + resolver: %.1f ms per pass = %,.0f tokens/s (one thread)%n", resolutionMs, tokens / (resolutionMs / 1000));
         System.out.printf("finder + count score: %.1f ms per pass = %,.0f tokens/s (one thread); ranker/count-score time %.2f%n",
                 countMs, tokens / (countMs / 1000), resolutionMs / countMs);
+        System.out.printf("coordination resolver alone: %.1f ms per pass = %,.0f tokens/s (one thread); its speed / finder + resolver's %.2f%n",
+                coordinationMs, tokens / (coordinationMs / 1000), resolutionMs / coordinationMs);
         System.out.printf("whole pipeline:    %.1f ms per pass = %,.0f tokens/s (one thread)%n", wholeMs, tokens / (wholeMs / 1000));
         System.out.printf("finder + resolver share of the whole pipeline: %.1f%%%n", 100 * resolutionMs / wholeMs);
     }

@@ -10,7 +10,7 @@ import java.util.Set;
  * told {@code auto} and to tell when the tags belong to neither (a host tagger with a tag set of its own, or the
  * wrong feature mapped). Tags known to both sets (SYM) count for both.
  */
-final class TagCensus {
+public final class TagCensus {
     /** Fewer tags than this share of the document in the chosen set means the tags are not from it. */
     static final double MATCH_SHARE = 0.5;
     private static final int EXAMPLES = 5;
@@ -21,7 +21,7 @@ final class TagCensus {
     private final Set<String> unknown = new LinkedHashSet<>();
     private final Set<String> seen = new LinkedHashSet<>();
 
-    void add(String tag) {
+    public void add(String tag) {
         tags++;
         boolean isPenn = TagSet.PENN.contains(tag);
         boolean isUniversal = TagSet.UD.contains(tag);
@@ -32,12 +32,12 @@ final class TagCensus {
     }
 
     /** The set most of the tags belong to (Penn on a tie). */
-    TagSet likeliest() {
+    public TagSet likeliest() {
         return universal > penn ? TagSet.UD : TagSet.PENN;
     }
 
     /** Whether at least {@link #MATCH_SHARE} of the tags belong to {@code set}. */
-    boolean matches(TagSet set) {
+    public boolean matches(TagSet set) {
         long in = set == TagSet.PENN ? penn : universal;
         return tags == 0 || in >= MATCH_SHARE * tags;
     }

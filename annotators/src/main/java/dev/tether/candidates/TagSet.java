@@ -82,7 +82,7 @@ public enum TagSet {
     }
 
     /** The value of the finder's {@code tagset} parameter: {@code penn}, {@code ud}, or {@code null} for {@code auto}. */
-    static TagSet parameter(String value, String parameterName) {
+    public static TagSet parameter(String value, String parameterName) {
         switch (value == null ? "" : value.trim().toLowerCase(Locale.ROOT)) {
             case "penn": return PENN;
             case "ud": return UD;

@@ -10,6 +10,9 @@ import dev.tether.output.RunManifest;
 import dev.tether.pipeline.CollectionRun;
 import dev.tether.pipeline.DocumentFiles;
 import dev.tether.pipeline.TetherPipeline;
+import dev.tether.spark.SparkJob;
+import dev.tether.spark.SparkLibraries;
+import dev.tether.spark.SparkMaster;
 import me.tongfei.progressbar.ConsoleProgressBarConsumer;
 import me.tongfei.progressbar.ProgressBar;
 import me.tongfei.progressbar.ProgressBarBuilder;
@@ -48,7 +51,7 @@ final class AnnotateCommand implements Command {
 
     @Override
     public String usage() {
-        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N] [--chunks] [--fresh] [--report]";
+        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N | --spark MASTER] [--chunks] [--fresh] [--report]";
     }
 
     @Override
@@ -64,6 +67,8 @@ final class AnnotateCommand implements Command {
                 + "  --model M          'default' (the shipped model) or a model file from 'tether train'\n"
                 + "  --threads N        pipelines run side by side, sharing one loaded model (default: the\n"
                 + "                     number of cores, " + Runtime.getRuntime().availableProcessors() + " here); the output does not depend on N\n"
+                + "  --spark MASTER     run on Apache Spark: local[N] (embedded, N pipelines), spark://host:port, yarn,\n"
+                + "                     k8s://...; the output is byte for byte that of a run on threads\n"
                 + "  --chunks           also write base chunks into the XMI (slower; Tether does not need them)\n"
                 + "  --fresh            start over: forget what an earlier run into --out completed\n"
                 + "  --report           also write the HTML audit report into --out/" + REPORT + "/ (see 'tether audit')\n\n"
@@ -76,8 +81,13 @@ final class AnnotateCommand implements Command {
 
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
-        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model", "threads"),
+        CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model", "threads", "spark"),
                 Set.of("chunks", "fresh", "report"));
+        SparkMaster spark = SparkOption.master(a.value("spark", null));
+        if (spark != null && a.has("threads")) {
+            throw new UsageException("--threads and --spark exclude each other: on Spark the master sets how many"
+                    + " pipelines run side by side (local[N], or the cluster's executor cores)");
+        }
         Path in = Path.of(a.required("in"));
         Path outDir = Path.of(a.required("out"));
         String model = a.value("model", ModelLocator.DEFAULT);
@@ -100,23 +110,29 @@ final class AnnotateCommand implements Command {
         } catch (ResourceInitializationException e) {
             throw new IOException("cannot build the pipeline: " + CollectionRun.rootMessage(e), e);
         }
-        OutputFolder.prepare(outDir);
-        // An old summary would claim the folder is complete while this run is under way.
-        Files.deleteIfExists(outDir.resolve(SUMMARY));
-        CollectionRun.Settings settings = new CollectionRun.Settings(model, loaded.id(), chunks, threads, a.has("fresh"),
-                Tether.version());
-
+        CollectionRun.Settings settings;
         CollectionRun.Result result;
-        int total = listing.documents().size();
-        boolean showProgress = System.console() != null && total > 1;
-        try (ProgressBar bar = showProgress ? new ProgressBarBuilder().setTaskName("annotating").setInitialMax(total)
-                .setStyle(ProgressBarStyle.ASCII).setConsumer(new ConsoleProgressBarConsumer(err)).build() : null) {
-            result = new CollectionRun(listing, outDir, settings, done -> {
-                if (bar != null) bar.stepTo(done);
-            }).run(pipeline);
+        if (spark == null) {
+            OutputFolder.prepare(outDir);
+            // An old summary would claim the folder is complete while this run is under way.
+            Files.deleteIfExists(outDir.resolve(SUMMARY));
+            settings = new CollectionRun.Settings(model, loaded.id(), chunks, threads, a.has("fresh"), Tether.version());
+            result = runWithProgress(listing, outDir, settings, err, run -> run.run(pipeline));
+        } else {
+            SparkLibraries.require();
+            try (SparkJob job = SparkJob.start(spark, "tether annotate")) {
+                job.checkExecutors(List.of(in), model, loaded.id(), outDir); // before any output, like the checks above
+                OutputFolder.prepare(outDir);
+                Files.deleteIfExists(outDir.resolve(SUMMARY));
+                settings = new CollectionRun.Settings(model, loaded.id(), chunks, job.parallelism(), a.has("fresh"),
+                        Tether.version());
+                CollectionRun.Elsewhere onSpark = job.annotation(model, loaded.id(), chunks, outDir);
+                result = runWithProgress(listing, outDir, settings, err, run -> run.run(onSpark));
+            }
         }
         writeSummary(outDir.resolve(SUMMARY), settings, listing, result);
 
+        int total = listing.documents().size();
         out.printf("annotated %,d of %,d documents (%,d reused from an earlier run), %,d attachment decisions, %.1f s%n",
                 result.complete(), total, result.reused(), result.decisions(), result.seconds());
         if (listing.skippedTotal() > 0) out.println("skipped: " + skippedText(listing));
@@ -135,6 +151,24 @@ final class AnnotateCommand implements Command {
             return Tether.SOME_FAILED;
         }
         return reported;
+    }
+
+    @FunctionalInterface
+    private interface Runner {
+        CollectionRun.Result run(CollectionRun run) throws IOException;
+    }
+
+    private static CollectionRun.Result runWithProgress(DocumentFiles.Listing listing, Path outDir,
+                                                        CollectionRun.Settings settings, PrintStream err, Runner runner)
+            throws IOException {
+        int total = listing.documents().size();
+        boolean showProgress = System.console() != null && total > 1;
+        try (ProgressBar bar = showProgress ? new ProgressBarBuilder().setTaskName("annotating").setInitialMax(total)
+                .setStyle(ProgressBarStyle.ASCII).setConsumer(new ConsoleProgressBarConsumer(err)).build() : null) {
+            return runner.run(new CollectionRun(listing, outDir, settings, done -> {
+                if (bar != null) bar.stepTo(done);
+            }));
+        }
     }
 
     /** "3 with other endings, 1 hidden, 2 symbolic links (not followed)": what the listing left out. */

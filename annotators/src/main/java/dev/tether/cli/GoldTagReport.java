@@ -5,7 +5,11 @@ import com.fasterxml.jackson.core.JsonGenerator;
 import dev.tether.audit.CalibrationPage;
 import dev.tether.candidates.HeadCandidateProposer;
 import dev.tether.evaluation.Accuracy;
+import dev.tether.evaluation.CoordinationEvaluation;
+import dev.tether.evaluation.CoordinationGoldTagEvaluator;
 import dev.tether.evaluation.GoldTagEvaluation;
+import dev.tether.treebank.ConlluReader;
+import dev.tether.treebank.TreebankSentence;
 import dev.tether.evaluation.GoldTagEvaluator;
 import dev.tether.model.TetherModel;
 import dev.tether.treebank.TreebankExampleExtractor;
@@ -30,6 +34,14 @@ final class GoldTagReport {
         TreebankExamples examples = new TreebankExampleExtractor(new HeadCandidateProposer()).extract(conllu);
         GoldTagEvaluation e = new GoldTagEvaluator().evaluate(model, examples);
         Accuracy a = e.attachment();
+        CoordinationEvaluation coordination = new CoordinationEvaluation();
+        CoordinationGoldTagEvaluator coordinationEvaluator = new CoordinationGoldTagEvaluator();
+        try (ConlluReader reader = ConlluReader.open(conllu)) {
+            for (TreebankSentence s = reader.next(); s != null; s = reader.next()) {
+                coordinationEvaluator.add(s, model.coordinationRanker().orElse(null), coordination);
+            }
+        }
+        boolean hasRanker = model.coordinationRanker().isPresent();
         if (json) {
             try (JsonGenerator g = new JsonFactory().createGenerator(out).useDefaultPrettyPrinter()) {
                 g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
@@ -44,6 +56,7 @@ final class GoldTagReport {
                 g.writeNumberField("calibration_error", e.calibration().ece());
                 AccuracyJson.versusCountScore(g, e.versusCountScore());
                 g.writeEndObject();
+                CoordinationReport.json(g, coordination, hasRanker);
                 g.writeObjectFieldStart("baselines");
                 for (Map.Entry<String, Accuracy> c : e.comparisons().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
                 g.writeEndObject();
@@ -61,6 +74,7 @@ final class GoldTagReport {
             out.println(AccuracyJson.versusCountScoreLine(e.versusCountScore()));
         out.printf("%-28s %7.2f%%%n", "candidate recall", 100 * e.candidateRecall().value());
             out.printf("%-28s %8.4f  (%d equal-width bins)%n", "expected calibration error", e.calibration().ece(), e.calibration().bins());
+            CoordinationReport.text(out, coordination, hasRanker);
         }
         if (report != null) {
             Path page = CalibrationPage.write(report, model.id(), conllu.getFileName().toString(),

@@ -16,6 +16,20 @@ final class RankerSummary {
     }
 
     static void print(TetherModel model, PrintStream out) {
+        printAttachment(model, out);
+        if (model.coordinationRanker().isEmpty()) {
+            out.println("coordination ranker  none: no coordination decisions (train with --conllu to get one)");
+            return;
+        }
+        dev.tether.coordination.CoordinationRanker c = model.coordinationRanker().get();
+        out.printf("coordination ranker  %,d pair decisions (%,d features, L2 %s, temperature %.3f), %,d scope decisions"
+                        + " (%,d features, L2 %s), %,d counts; families %s%n",
+                c.pairWeights().decisions(), c.pairWeights().size(), c.pairWeights().l2(), c.pairWeights().temperature(),
+                c.scopeWeights().decisions(), c.scopeWeights().size(), c.scopeWeights().l2(), c.counts().size(),
+                c.families().stream().map(dev.tether.coordination.CoordinationFeatureFamily::label).collect(Collectors.joining(", ")));
+    }
+
+    private static void printAttachment(TetherModel model, PrintStream out) {
         if (model.attachmentRanker().isEmpty()) {
             out.println("attachment ranker  none: the count-based score chooses heads (train with --conllu to get one)");
             return;

@@ -72,6 +72,7 @@ final class RunningTextReport {
         for (Map.Entry<String, Accuracy> c : e.byHeadClass().entrySet()) {
             out.printf("%-12s %6d %8.2f%%%n", c.getKey(), c.getValue().total(), 100 * c.getValue().value());
         }
+        CoordinationReport.text(out, e.coordination(), model.coordinationRanker().isPresent());
         out.printf("accuracy %.4f (95%% interval %.4f-%.4f)%n", a.value(), ci[0], ci[1]);
     }
 
@@ -97,6 +98,7 @@ final class RunningTextReport {
             for (Map.Entry<String, Accuracy> c : e.byHeadClass().entrySet()) AccuracyJson.write(g, c.getKey(), c.getValue());
             g.writeEndObject();
             g.writeEndObject();
+            CoordinationReport.json(g, e.coordination(), model.coordinationRanker().isPresent());
             writeBaselines(g, e);
             g.writeEndObject();
         }

@@ -50,6 +50,11 @@ public final class Tether {
         System.exit(new Tether().run(args, System.out, System.err));
     }
 
+    /** Runs one command line and returns its exit code (for a main class of another launcher, such as spark-submit's). */
+    public static int execute(String[] args, PrintStream out, PrintStream err) {
+        return new Tether().run(args, out, err);
+    }
+
     int run(String[] args, PrintStream out, PrintStream err) {
         if (args.length == 0) {
             printHelp(err);

@@ -18,6 +18,9 @@ import dev.tether.model.TetherModel;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.similarity.ThesaurusFile;
 import dev.tether.preprocessing.TreebankTaggerTrainer;
+import dev.tether.spark.SparkJob;
+import dev.tether.spark.SparkLibraries;
+import dev.tether.spark.SparkMaster;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -49,7 +52,7 @@ final class TrainCommand implements Command {
     public String usage() {
         return "train [--quadruples FILE...] [--conllu FILE...] [--raw PATH...] [--raw-counts FILE...]"
                 + " [--corrections SHEET... [--correction-weight W]] [--base MODEL|default] [--raw-weight W]"
-                + " [--reestimate ROUNDS] [--threads N] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
+                + " [--reestimate ROUNDS] [--threads N | --spark MASTER] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
@@ -71,6 +74,8 @@ final class TrainCommand implements Command {
                 + "                        back-off has little evidence, nearest neighbours of verb, noun and object decide\n"
                 + "  --save-raw-counts F   also write the merged raw counts to F (atomically)\n"
                 + "  --threads N           threads that count raw text (default 1; the model is the same for any N)\n"
+                + "  --spark MASTER        count the raw text on Apache Spark instead: local[N] (embedded), spark://host:port,\n"
+                + "                        yarn, k8s://...; the model is byte for byte the one counted on threads\n"
                 + "  --corrections SHEET.. review sheets from 'tether audit --queue', marked by a reviewer\n"
                 + "  --correction-weight W how much one reviewed decision counts (default 1)\n"
                 + "  --base MODEL|default  start from the counts (and ranker, tagger) of an existing model\n"
@@ -87,11 +92,16 @@ final class TrainCommand implements Command {
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1,
                 Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without", "raw",
-                        "raw-counts", "raw-weight", "reestimate", "threads", "save-raw-counts", "thesaurus"),
+                        "raw-counts", "raw-weight", "reestimate", "threads", "spark", "save-raw-counts", "thesaurus"),
                 Set.of("skip-malformed", "no-ranker", "no-tagger"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections") && !a.has("raw") && !a.has("raw-counts")) {
             throw new UsageException("give at least one training source with --quadruples, --conllu, --raw, --raw-counts or --corrections");
+        }
+        SparkMaster spark = SparkOption.master(a.value("spark", null));
+        if (spark != null && a.has("threads")) {
+            throw new UsageException("--threads and --spark exclude each other: on Spark the master sets how many"
+                    + " pipelines count side by side (local[N], or the cluster's executor cores)");
         }
         int threads = positiveInt(a.value("threads", "1"), "--threads");
         if (threads < 1) throw new UsageException("--threads must be at least 1");
@@ -118,11 +128,23 @@ final class TrainCommand implements Command {
                     inputs.add(p);
                     names.add(p.getFileName() == null ? f : p.getFileName().toString());
                 }
-                RawTextAttachmentCounting.Summary summary = new RawTextAttachmentCounting(threads).count(inputs);
+                RawTextAttachmentCounting.Summary summary;
+                String where;
+                if (spark == null) {
+                    summary = new RawTextAttachmentCounting(threads).count(inputs);
+                    where = threads + " thread" + (threads == 1 ? "" : "s");
+                } else {
+                    SparkLibraries.require();
+                    try (SparkJob job = SparkJob.start(spark, "tether train")) {
+                        job.checkExecutors(inputs, null, null, null);
+                        summary = job.countRawText(inputs);
+                        where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
+                    }
+                }
                 RawAttachmentCounts.Tally t = summary.counts().tally();
-                out.printf("raw text: %,d documents, %,d sentences, %,d tokens in %.1f s (%,.0f tokens/s, %d thread%s)%n",
+                out.printf("raw text: %,d documents, %,d sentences, %,d tokens in %.1f s (%,.0f tokens/s, %s)%n",
                         t.documents(), t.sentences(), t.tokens(), summary.seconds(), t.tokens() / Math.max(1e-9, summary.seconds()),
-                        threads, threads == 1 ? "" : "s");
+                        where);
                 if (summary.skippedCount() > 0 || summary.notDocuments() > 0) {
                     StringBuilder why = new StringBuilder();
                     summary.skipped().forEach((k, v) -> why.append(why.length() == 0 ? "" : ", ").append(v.size()).append(' ').append(k.label()));
@@ -147,6 +169,9 @@ final class TrainCommand implements Command {
             RawAttachmentCounts.Tally t = raw.tally();
             out.printf("raw counts: %,d prepositions with candidates, %,d unambiguous (%.1f%%), %,d ambiguous quadruple configurations%n",
                     t.prepositions(), t.unambiguous(), 100.0 * t.unambiguous() / Math.max(1, t.prepositions()), t.ambiguousQuadruples());
+        }
+        if (spark != null && !a.has("raw")) {
+            out.println("--spark: only raw text (--raw) is counted on Spark; the other sources are read here");
         }
         double correctionWeight = CorrectionEvents.weight(a.value("correction-weight", null), a.has("corrections"));
         boolean skip = a.has("skip-malformed");
@@ -197,6 +222,8 @@ final class TrainCommand implements Command {
             trainer.addTreebank(t, file.getFileName().toString(), fileSha256(file));
             out.printf("%-40s %,9d attachment examples, %,d quadruples (candidate recall %.3f)%n", file.getFileName(),
                     t.examples().size(), t.quadruples().size(), t.candidateRecall());
+            // The same trees train the coordination ranker.
+            trainer.addCoordinationSentences(dev.tether.treebank.ConlluReader.readAll(file));
         }
         if (raw != null) {
             double w;

@@ -5,6 +5,7 @@ import dev.tether.pipeline.DocumentFiles;
 import dev.tether.preprocessing.TextPreprocessor;
 import dev.tether.similarity.RawTextCounting;
 import org.apache.uima.analysis_engine.AnalysisEngine;
+import org.apache.uima.analysis_engine.AnalysisEngineDescription;
 import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
 import org.apache.uima.fit.factory.AggregateBuilder;
 import org.apache.uima.fit.factory.AnalysisEngineFactory;
@@ -105,34 +106,50 @@ public final class RawTextAttachmentCounting {
         }
     }
 
-    /** One thread: its own flow and CAS, documents taken from the shared position until none is left. */
-    private static void countShard(List<Path> files, AtomicInteger next, Path shard, List<String[]> skipped)
-            throws ResourceInitializationException, AnalysisEngineProcessException {
+    /**
+     * The flow that prepares a raw document for counting: the built-in preprocessing (the shipped model's tagger, no
+     * chunks) and the candidate finder, which writes the ambiguities that {@link UnlabelledAttachmentCounter} counts.
+     * The Spark job runs the same flow.
+     */
+    public static AnalysisEngineDescription findingFlow() throws ResourceInitializationException {
         AggregateBuilder flow = new AggregateBuilder();
         flow.add(AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false));
         flow.add(AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class,
                 AttachmentCandidateFinder.PARAM_TAGSET, "penn"));
+        return flow.createAggregateDescription();
+    }
+
+    /**
+     * Reads {@code file} and runs {@code engine} on it in {@code jcas}: {@code null} when it was processed, otherwise
+     * the skip (its {@link RawTextCounting.Skip} name and the reason naming the file).
+     */
+    public static String[] process(AnalysisEngine engine, JCas jcas, Path file) {
+        RawTextCounting.Reading r = RawTextCounting.read(file);
+        if (r.skip() != null) return new String[] {r.skip().name(), r.reason()};
+        jcas.reset();
+        jcas.setDocumentLanguage("en");
+        jcas.setDocumentText(r.text());
+        try {
+            engine.process(jcas);
+        } catch (AnalysisEngineProcessException | RuntimeException e) {
+            return new String[] {RawTextCounting.Skip.UNREADABLE.name(), file + ": preprocessing failed (" + e.getMessage() + ")"};
+        }
+        return null;
+    }
+
+    /** One thread: its own flow and CAS, documents taken from the shared position until none is left. */
+    private static void countShard(List<Path> files, AtomicInteger next, Path shard, List<String[]> skipped)
+            throws ResourceInitializationException, AnalysisEngineProcessException {
+        AggregateBuilder flow = new AggregateBuilder();
+        flow.add(findingFlow());
         flow.add(AnalysisEngineFactory.createEngineDescription(UnlabelledAttachmentCounter.class,
                 UnlabelledAttachmentCounter.PARAM_COUNTS_FILE, shard.toString()));
         AnalysisEngine engine = flow.createAggregate();
         try {
             JCas jcas = CasCreationUtils.createCas(engine.getAnalysisEngineMetaData()).getJCas();
             for (int i = next.getAndIncrement(); i < files.size(); i = next.getAndIncrement()) {
-                Path file = files.get(i);
-                RawTextCounting.Reading r = RawTextCounting.read(file);
-                if (r.skip() != null) {
-                    skipped.add(new String[] {r.skip().name(), r.reason()});
-                    continue;
-                }
-                jcas.reset();
-                jcas.setDocumentLanguage("en");
-                jcas.setDocumentText(r.text());
-                try {
-                    engine.process(jcas);
-                } catch (AnalysisEngineProcessException | RuntimeException e) {
-                    skipped.add(new String[] {RawTextCounting.Skip.UNREADABLE.name(),
-                            file + ": preprocessing failed (" + e.getMessage() + ")"});
-                }
+                String[] skip = process(engine, jcas, files.get(i));
+                if (skip != null) skipped.add(skip);
             }
             engine.collectionProcessComplete();
         } catch (org.apache.uima.cas.CASException e) {

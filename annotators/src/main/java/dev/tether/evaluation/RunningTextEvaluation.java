@@ -19,6 +19,7 @@ public final class RunningTextEvaluation {
     public static final String COUNT_SCORE = "count-score";
 
     final Accuracy attachment = new Accuracy();
+    final CoordinationEvaluation coordination = new CoordinationEvaluation();
     final Accuracy candidateRecall = new Accuracy();
     final CalibrationError calibration = new CalibrationError();
     final PairedComparison versusCountScore = new PairedComparison();
@@ -38,6 +39,8 @@ public final class RunningTextEvaluation {
     }
 
     public Accuracy attachment() { return attachment; }
+    /** Coordination scope against the gold coordinations, with its baselines. */
+    public CoordinationEvaluation coordination() { return coordination; }
     /** Gold head among the pipeline's candidates, over all gold attachments. */
     public Accuracy candidateRecall() { return candidateRecall; }
     /** Stated probability against correctness of every decision that answers a gold attachment. */

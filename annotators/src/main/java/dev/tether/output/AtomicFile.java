@@ -39,16 +39,31 @@ public final class AtomicFile {
 
     /** The temporary name used while {@code target} is being written. */
     public static Path temporaryFor(Path target) {
-        return target.resolveSibling("." + target.getFileName() + TEMPORARY_SUFFIX);
+        return temporaryFor(target, null);
+    }
+
+    /**
+     * The temporary name used while {@code target} is being written by the writer {@code writer}
+     * ({@code .<name>.<writer>}{@value #TEMPORARY_SUFFIX}), so that two writers of the same file (two attempts of one
+     * Spark task) never write into each other's temporary file; {@code null} gives the plain temporary name.
+     */
+    public static Path temporaryFor(Path target, String writer) {
+        String tag = writer == null ? "" : "." + writer;
+        return target.resolveSibling("." + target.getFileName() + tag + TEMPORARY_SUFFIX);
     }
 
     /** Writes {@code content} to a temporary file and returns it; {@link #commit} gives it its final name. */
     public static Path writeTemporary(Path target, Content content) throws IOException {
-        return writeTemporary(target, content, false);
+        return writeTemporary(target, null, content, false);
     }
 
-    private static Path writeTemporary(Path target, Content content, boolean force) throws IOException {
-        Path temporary = temporaryFor(target);
+    /** Like {@link #writeTemporary(Path, Content)}, into the temporary file of {@code writer}. */
+    public static Path writeTemporary(Path target, String writer, Content content) throws IOException {
+        return writeTemporary(target, writer, content, false);
+    }
+
+    private static Path writeTemporary(Path target, String writer, Content content, boolean force) throws IOException {
+        Path temporary = temporaryFor(target, writer);
         Files.createDirectories(target.toAbsolutePath().getParent());
         boolean done = false;
         try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
@@ -81,7 +96,12 @@ public final class AtomicFile {
 
     /** Renames the temporary file of {@code target} to {@code target}, replacing what was there. */
     public static void commit(Path target) throws IOException {
-        Path temporary = temporaryFor(target);
+        commit(target, null);
+    }
+
+    /** Renames the temporary file that {@code writer} wrote for {@code target} to {@code target}. */
+    public static void commit(Path target, String writer) throws IOException {
+        Path temporary = temporaryFor(target, writer);
         try {
             Files.move(temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } catch (AtomicMoveNotSupportedException e) {
@@ -100,7 +120,7 @@ public final class AtomicFile {
 
     /** Writes {@code target} completely or not at all, forced to disk before the rename. */
     public static void write(Path target, Content content) throws IOException {
-        writeTemporary(target, content, true);
+        writeTemporary(target, null, content, true);
         commit(target);
     }
 }

@@ -37,7 +37,7 @@ public final class RunManifest implements AutoCloseable {
 
     /** One complete document. {@code outputs} maps each output file name (relative to the folder) to its SHA-256. */
     public record Entry(String doc, String inputSha256, String settings, Map<String, String> outputs, long decisions,
-                        long characters) {
+                        long characters) implements java.io.Serializable {
         public Entry {
             outputs = Collections.unmodifiableMap(new LinkedHashMap<>(outputs));
         }

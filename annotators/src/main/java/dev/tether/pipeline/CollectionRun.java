@@ -1,35 +1,17 @@
 package dev.tether.pipeline;
 
-import dev.tether.documents.DocumentLabel;
-import dev.tether.io.Sha256;
-import dev.tether.ledger.LedgerWriter;
 import dev.tether.output.AtomicFile;
 import dev.tether.output.IoFailure;
 import dev.tether.output.OutputFolder;
 import dev.tether.output.RunManifest;
-import dev.tether.output.XmiDocumentWriter;
-import org.apache.uima.analysis_engine.AnalysisEngine;
 import org.apache.uima.analysis_engine.AnalysisEngineDescription;
-import org.apache.uima.fit.factory.AnalysisEngineFactory;
-import org.apache.uima.jcas.JCas;
-import org.apache.uima.util.CasCreationUtils;
 
 import java.io.IOException;
-import java.io.OutputStream;
-import java.io.OutputStreamWriter;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.DigestOutputStream;
-import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.HashSet;
-import java.util.HexFormat;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -53,6 +35,10 @@ import java.util.function.IntConsumer;
  * committed (renamed, entered in the manifest) in their sorted order, whatever the thread that did them, and at
  * most a few documents per thread are in flight, so memory grows with the largest document, not with the
  * collection. The output bytes do not depend on the thread count.
+ *
+ * <p><b>Elsewhere.</b> {@link #run(Elsewhere)} keeps everything above but hands the documents to another runner (the
+ * Spark job, {@code dev.tether.spark}), whose {@link DocumentAnnotator}s do the same work per document; the outcomes
+ * come back and are recorded in document order, so the folder ends byte for byte as after a run on threads.
  */
 public final class CollectionRun {
     public static final String XMI = ".xmi";
@@ -61,7 +47,7 @@ public final class CollectionRun {
     /** What shapes the output: the model location and id, the chunk option, Tether's version. */
     public record Settings(String model, String modelId, boolean chunks, int threads, boolean fresh, String version) {
         /** The part of the settings that the output depends on, as recorded in the manifest. */
-        String fingerprint() {
+        public String fingerprint() {
             return "tether " + version + "; model " + modelId + "; chunks " + chunks;
         }
     }
@@ -84,7 +70,8 @@ public final class CollectionRun {
     private final IntConsumer progress;
 
     // Per-document outcome, filled by workers, consumed in document order by commit().
-    private final Outcome[] outcomes;
+    private final DocumentOutcome[] outcomes;
+    private static final DocumentOutcome DONE = DocumentOutcome.failed(-1, null);
     private int nextToCommit;
     private int nextToTake;
     private final int window;
@@ -101,12 +88,58 @@ public final class CollectionRun {
         this.out = out;
         this.settings = settings;
         this.progress = progress;
-        this.outcomes = new Outcome[listing.documents().size()];
+        this.outcomes = new DocumentOutcome[listing.documents().size()];
         this.window = 4 * Math.max(1, settings.threads());
     }
 
     /** Runs the whole collection; the output folder must exist and be writable ({@link OutputFolder#prepare}). */
     public Result run(AnalysisEngineDescription pipeline) throws IOException {
+        return run(() -> runWorkers(pipeline));
+    }
+
+    /**
+     * Runs the whole collection with the documents annotated elsewhere (the Spark job): {@code elsewhere} is given
+     * every document, in sorted order with what an earlier run completed for it, and returns one outcome per document
+     * (any order). Outcomes whose files are still temporary are committed here; all are recorded in document order,
+     * exactly as the threads of {@link #run(AnalysisEngineDescription)} record theirs, so the folder ends the same.
+     */
+    public Result run(Elsewhere elsewhere) throws IOException {
+        return run(() -> {
+            List<DocumentTask> tasks = new ArrayList<>(outcomes.length);
+            for (int i = 0; i < outcomes.length; i++) {
+                Path file = listing.documents().get(i);
+                String doc = listing.name(file);
+                tasks.add(new DocumentTask(i, file.toString(), doc, manifest.get(doc)));
+            }
+            DocumentOutcome[] byIndex = new DocumentOutcome[outcomes.length];
+            for (DocumentOutcome o : elsewhere.annotate(List.copyOf(tasks), settings.fingerprint())) {
+                if (o.index() < 0 || o.index() >= byIndex.length || byIndex[o.index()] != null) {
+                    throw new IOException("the job returned a second outcome, or one for no document, at index " + o.index());
+                }
+                byIndex[o.index()] = o;
+            }
+            for (int i = 0; i < byIndex.length; i++) {
+                if (byIndex[i] == null) throw new IOException("the job returned no outcome for " + tasks.get(i).doc());
+                commit(i, byIndex[i]);
+            }
+            // Temporary files of attempts whose process died before it could delete them (a lost executor).
+            OutputFolder.removeTemporaryFiles(out);
+        });
+    }
+
+    /** Annotates the documents of a run somewhere else; see {@link #run(Elsewhere)}. */
+    @FunctionalInterface
+    public interface Elsewhere {
+        /** One outcome per task; {@code fingerprint} is the settings' fingerprint each entry must carry. */
+        List<DocumentOutcome> annotate(List<DocumentTask> tasks, String fingerprint) throws IOException;
+    }
+
+    @FunctionalInterface
+    private interface Body {
+        void run() throws IOException;
+    }
+
+    private Result run(Body body) throws IOException {
         long start = System.nanoTime();
         int temporaryRemoved = OutputFolder.removeTemporaryFiles(out);
         manifest = RunManifest.open(out);
@@ -117,7 +150,7 @@ public final class CollectionRun {
                 Files.deleteIfExists(out.resolve(RunManifest.FILE));
             }
             removeDocumentsNoLongerInTheInput();
-            runWorkers(pipeline);
+            body.run();
             manifest.compact();
         } finally {
             manifest.close();
@@ -172,22 +205,13 @@ public final class CollectionRun {
 
     /** One worker: its own engine and CAS; takes documents in order until none is left. */
     private Void work(AnalysisEngineDescription pipeline) throws Exception {
-        AnalysisEngine engine = AnalysisEngineFactory.createEngine(pipeline);
-        try {
-            JCas jcas = CasCreationUtils.createCas(engine.getAnalysisEngineMetaData()).getJCas();
-            LedgerWriter ledger = new LedgerWriter();
+        try (DocumentAnnotator annotator = new DocumentAnnotator(pipeline)) {
+            String fingerprint = settings.fingerprint();
             for (int i = take(); i >= 0; i = take()) {
-                Outcome outcome;
-                try {
-                    outcome = annotate(listing.documents().get(i), engine, jcas, ledger);
-                } catch (Throwable e) { // one document fails alone, whatever went wrong with it
-                    outcome = Outcome.failed(reason(listing.documents().get(i), e));
-                }
-                commit(i, outcome);
+                Path file = listing.documents().get(i);
+                String doc = listing.name(file);
+                commit(i, annotator.annotate(new DocumentTask(i, file.toString(), doc, manifest.get(doc)), out, fingerprint, null));
             }
-            engine.collectionProcessComplete();
-        } finally {
-            engine.destroy();
         }
         return null;
     }
@@ -199,25 +223,25 @@ public final class CollectionRun {
     }
 
     /** Records the outcome of document {@code i} and commits every document, in order, whose outcome is known. */
-    private synchronized void commit(int i, Outcome outcome) throws IOException {
+    private synchronized void commit(int i, DocumentOutcome outcome) throws IOException {
         outcomes[i] = outcome;
         while (nextToCommit < outcomes.length && outcomes[nextToCommit] != null) {
             String doc = listing.name(listing.documents().get(nextToCommit));
-            Outcome o = outcomes[nextToCommit];
-            if (o.entry != null && o.reused) {
+            DocumentOutcome o = outcomes[nextToCommit];
+            if (!o.isFailure() && o.reused()) {
                 reused++;
-            } else if (o.entry != null) {
+            } else if (!o.isFailure()) {
                 try {
-                    for (String file : o.entry.outputs().keySet()) AtomicFile.commit(out.resolve(file));
-                    manifest.complete(o.entry);
+                    if (!o.committed()) for (String file : o.entry().outputs().keySet()) AtomicFile.commit(out.resolve(file));
+                    manifest.complete(o.entry());
                     annotated++;
                 } catch (IOException e) {
                     fail(doc, IoFailure.describe(e));
                 }
             } else {
-                fail(doc, o.reason);
+                fail(doc, o.reason());
             }
-            outcomes[nextToCommit] = Outcome.DONE; // let the document's data go
+            outcomes[nextToCommit] = DONE; // let the document's data go
             nextToCommit++;
             progress.accept(nextToCommit);
         }
@@ -241,93 +265,11 @@ public final class CollectionRun {
         return any;
     }
 
-    private Outcome annotate(Path file, AnalysisEngine engine, JCas jcas, LedgerWriter ledger) throws Exception {
-        String doc = listing.name(file);
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            return Outcome.failed(file + ": no such file (it was listed at the start of the run and has gone since)");
-        }
-        String inputSha = Sha256.hex(bytes);
-        RunManifest.Entry before = manifest.get(doc);
-        if (before != null && before.inputSha256().equals(inputSha) && before.settings().equals(settings.fingerprint())
-                && outputsIntact(before)) {
-            return Outcome.reused(before);
-        }
-        String text = DocumentText.decode(file, bytes);
-        jcas.reset();
-        jcas.setDocumentLanguage("en");
-        jcas.setDocumentText(text);
-        DocumentLabel.set(jcas, doc);
-        engine.process(jcas);
-        Map<String, String> outputs = new LinkedHashMap<>();
-        long[] decisions = {0};
-        outputs.put(doc + XMI, writeTemporary(out.resolve(doc + XMI), o -> XmiDocumentWriter.write(jcas.getCas(), o)));
-        outputs.put(doc + LEDGER, writeTemporary(out.resolve(doc + LEDGER), o -> {
-            Writer w = new OutputStreamWriter(o, StandardCharsets.UTF_8);
-            decisions[0] = ledger.write(jcas, doc, w);
-            w.flush();
-        }));
-        jcas.reset();
-        return Outcome.written(new RunManifest.Entry(doc, inputSha, settings.fingerprint(), outputs, decisions[0],
-                text.codePointCount(0, text.length())));
-    }
-
-    /** Writes a temporary file for {@code target}; returns the SHA-256 of what was written. */
-    private static String writeTemporary(Path target, AtomicFile.Content content) throws IOException {
-        MessageDigest digest = Sha256.newDigest();
-        AtomicFile.writeTemporary(target, o -> {
-            DigestOutputStream d = new DigestOutputStream(o, digest);
-            content.writeTo(d);
-            d.flush();
-        });
-        return HexFormat.of().formatHex(digest.digest());
-    }
-
-    private boolean outputsIntact(RunManifest.Entry e) throws IOException {
-        for (Map.Entry<String, String> o : e.outputs().entrySet()) {
-            Path file = out.resolve(o.getKey());
-            if (!Files.isRegularFile(file)) return false;
-            MessageDigest digest = Sha256.newDigest();
-            try (var in = Files.newInputStream(file)) {
-                byte[] buffer = new byte[1 << 16];
-                for (int n = in.read(buffer); n > 0; n = in.read(buffer)) digest.update(buffer, 0, n);
-            }
-            if (!HexFormat.of().formatHex(digest.digest()).equals(o.getValue())) return false;
-        }
-        return true;
-    }
-
-    private static String reason(Path file, Throwable e) {
-        if (e instanceof dev.tether.io.InputFormatException) return e.getMessage();
-        if (e instanceof IOException) return IoFailure.describe(e);
-        if (e instanceof OutOfMemoryError) return file + ": not enough memory for this document; give Java more (-Xmx) or split the file";
-        return rootMessage(e);
-    }
-
     public static String rootMessage(Throwable e) {
         Throwable t = e;
         while (t.getCause() != null && t.getCause() != t) t = t.getCause();
         if (t instanceof IOException && !(t instanceof dev.tether.io.InputFormatException)) return IoFailure.describe(t);
         String m = t.getMessage();
         return m != null ? m : t.getClass().getSimpleName();
-    }
-
-    /** A document's outcome: written (entry, files still temporary), reused (entry), or failed (reason). */
-    private record Outcome(RunManifest.Entry entry, boolean reused, String reason) {
-        static final Outcome DONE = new Outcome(null, false, null);
-
-        static Outcome written(RunManifest.Entry e) {
-            return new Outcome(e, false, null);
-        }
-
-        static Outcome reused(RunManifest.Entry e) {
-            return new Outcome(e, true, null);
-        }
-
-        static Outcome failed(String reason) {
-            return new Outcome(null, false, reason);
-        }
     }
 }

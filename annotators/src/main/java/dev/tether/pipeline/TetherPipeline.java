@@ -1,6 +1,7 @@
 package dev.tether.pipeline;
 
 import dev.tether.attachment.AttachmentResolver;
+import dev.tether.coordination.CoordinationResolver;
 import dev.tether.candidates.AttachmentCandidateFinder;
 import dev.tether.preprocessing.TextPreprocessor;
 import dev.tether.type.Chunk;
@@ -17,7 +18,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The standalone flow for raw text: built-in preprocessing, candidate finder, attachment resolver. Pipelines that
+ * The standalone flow for raw text: built-in preprocessing, candidate finder, attachment resolver, coordination resolver. Pipelines that
  * bring their own tokens and tags use the finder and resolver alone (see {@link #resolution}).
  *
  * <p>The preprocessing writes base chunks only when asked: none of Tether's engines reads them, and the chunker
@@ -76,11 +77,20 @@ public final class TetherPipeline {
         return false;
     }
 
-    /** Candidate finder and resolver, for CASes that already hold Tether's sentences and tagged tokens. */
+    /**
+     * Candidate finder, attachment resolver and coordination resolver, for CASes that already hold Tether's sentences
+     * and tagged tokens.
+     */
     public static AnalysisEngineDescription resolution(String model) throws ResourceInitializationException {
         return AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
-                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model));
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model),
+                coordination(model));
+    }
+
+    /** The coordination resolver alone (it reads Tether's sentences and tagged tokens). */
+    public static AnalysisEngineDescription coordination(String model) throws ResourceInitializationException {
+        return AnalysisEngineFactory.createEngineDescription(CoordinationResolver.class, CoordinationResolver.PARAM_MODEL, model);
     }
 
     /** Like {@link #resolution(String)}, the resolver set to the given {@link AttachmentResolver#PARAM_SCORER}. */
@@ -88,7 +98,8 @@ public final class TetherPipeline {
         return AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
                 AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model,
-                        AttachmentResolver.PARAM_SCORER, scorer));
+                        AttachmentResolver.PARAM_SCORER, scorer),
+                coordination(model));
     }
 
     public static AnalysisEngine createForRawText(String model) throws ResourceInitializationException {

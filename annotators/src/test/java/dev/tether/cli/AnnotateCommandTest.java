@@ -80,10 +80,42 @@ class AnnotateCommandTest {
         assertEquals(1, summary.at("/skipped/other-extension").asInt(), "the .csv file is counted, not dropped silently");
     }
 
+    /** A coordination object: the coordinator and every conjunct with its head, by offsets into the text, in order. */
+    private static void checkCoordinationLine(JsonNode line, String text, String where) {
+        JsonNode coordinator = line.get("coordinator");
+        assertSpan(coordinator, text, where);
+        JsonNode conjuncts = line.get("conjuncts");
+        assertTrue(conjuncts.size() >= 2, where);
+        for (JsonNode c : conjuncts) {
+            assertSpan(c, text, where);
+            assertSpan(c.get("head"), text, where);
+            assertTrue(c.get("begin").asInt() <= c.get("head").get("begin").asInt()
+                    && c.get("head").get("end").asInt() <= c.get("end").asInt(), "head inside its conjunct: " + where);
+        }
+        assertTrue(conjuncts.get(0).get("end").asInt() <= coordinator.get("begin").asInt(), where);
+        assertTrue(coordinator.get("end").asInt() <= conjuncts.get(conjuncts.size() - 1).get("begin").asInt(), where);
+        double p = line.get("probability").asDouble();
+        assertTrue(p > 0 && p <= 1, where);
+        assertTrue(line.get("alternatives").isArray(), where);
+        assertFalse(line.get("evidence").get("text").asText().isEmpty(), where);
+    }
+
+    private static void assertSpan(JsonNode span, String text, String where) {
+        assertNotNull(span, where);
+        int begin = span.get("begin").asInt();
+        int end = span.get("end").asInt();
+        assertTrue(0 <= begin && begin < end && end <= text.length(), where);
+        assertEquals(text.substring(begin, end), span.get("text").asText(), where);
+    }
+
     /** One ledger object: the DESIGN keys, offsets that index the document text, a ranked list led by the choice. */
     private static void checkLedgerLine(JsonNode line, String doc, String text) {
         String where = doc + ": " + line;
         assertEquals(doc, line.get("doc").asText(), where);
+        if (line.get("kind").asText().equals("coordination")) {
+            checkCoordinationLine(line, text, where);
+            return;
+        }
         assertEquals("attachment", line.get("kind").asText(), where);
         JsonNode preposition = line.get("preposition");
         JsonNode object = line.get("object");

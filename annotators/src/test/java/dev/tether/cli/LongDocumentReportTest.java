@@ -73,8 +73,11 @@ class LongDocumentReportTest {
         assertTrue(size < 2_000_000, "page of " + size + " bytes");
         String html = Files.readString(page);
         long decisions = lines(run.resolve("refit-log.txt.ledger.jsonl"));
+        long coordinations = Files.readAllLines(run.resolve("refit-log.txt.ledger.jsonl")).stream()
+                .filter(l -> l.contains("\"kind\":\"coordination\"")).count();
         assertTrue(decisions > 500, decisions + " decisions");
-        assertEquals(decisions, count(html, "<path class=\"arc chosen\""), "every decision drawn");
+        assertEquals(decisions - coordinations, count(html, "<path class=\"arc chosen\""), "every attachment drawn");
+        assertTrue(count(html, "<path class=\"arc conjunct\"") >= 2 * coordinations, "every coordination drawn with an arc per conjunct");
         assertEquals(decisions, count(html, "<tr id=\"d\\d+\""), "every decision in the table");
         int sentences = count(text, "\\.\\s");
         int rowCount = count(html, "<div class=\"row\"");

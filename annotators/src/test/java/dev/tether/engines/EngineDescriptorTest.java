@@ -28,6 +28,9 @@ import org.apache.uima.util.XMLInputSource;
 import org.junit.jupiter.api.Test;
 
 import dev.tether.attachment.AttachmentResolver;
+import dev.tether.coordination.CoordinationChecks;
+import dev.tether.coordination.CoordinationResolver;
+import dev.tether.type.CoordinationDecision;
 import dev.tether.attachment.DecisionChecks;
 import dev.tether.candidates.AttachmentCandidateFinder;
 import dev.tether.counts.RawAttachmentCounts;
@@ -49,11 +52,15 @@ class EngineDescriptorTest {
     static final String PREPROCESSOR = "dev.tether.engines.TextPreprocessor";
     static final String FINDER = "dev.tether.engines.AttachmentCandidateFinder";
     static final String RESOLVER = "dev.tether.engines.AttachmentResolver";
+    static final String COORDINATION = "dev.tether.engines.CoordinationResolver";
     static final String RAW_TEXT_PIPELINE = "dev.tether.engines.RawTextPipeline";
     static final String TAGGED_TEXT_PIPELINE = "dev.tether.engines.TaggedTextPipeline";
     static final String COUNTER = "dev.tether.engines.UnlabelledAttachmentCounter";
 
     /** Three prepositional phrases: 'on the port engine', 'with a spare', 'from the stores'. */
+    /** One coordination: 'bearings and seals', with a premodifier before and a phrase after. */
+    static final String BEARINGS_ENTRY = "Inspectors checked the worn bearings and seals on the pump.";
+
     static final String GASKET_ENTRY = "The engineer replaced the gasket on the port engine with a spare from the stores.";
 
     static AnalysisEngineDescription byName(String name) throws Exception {
@@ -126,6 +133,13 @@ class EngineDescriptorTest {
             assertTrue(d.getRanking().size() <= 5, "the resolver's default ranking size when the aggregate leaves it unset");
             assertEquals(LoadedModels.get(LoadedModels.DEFAULT).id(), d.getModelId(), "the shipped model from the resource");
         }
+        CAS second = pipeline.newCAS();
+        second.setDocumentText(BEARINGS_ENTRY);
+        pipeline.process(second);
+        List<CoordinationDecision> coordinations = second.getJCas().select(CoordinationDecision.class).asList();
+        assertEquals(1, coordinations.size());
+        CoordinationChecks.assertSane(coordinations.get(0));
+        assertEquals(LoadedModels.get(LoadedModels.DEFAULT).id(), coordinations.get(0).getModelId());
     }
 
     /** Tokens and tags already in the CAS (here from the preprocessor descriptor); the aggregate adds decisions only. */
@@ -172,8 +186,9 @@ class EngineDescriptorTest {
             ExternalResourceBinding[] bindings = resources.getExternalResourceBindings();
             // The raw-text flow binds the same model to its preprocessor too, which tags with the model's tagger.
             List<String> keys = name.equals(RAW_TEXT_PIPELINE)
-                    ? List.of("preprocessor/" + TextPreprocessor.RES_MODEL, "resolver/" + AttachmentResolver.RES_MODEL)
-                    : List.of("resolver/" + AttachmentResolver.RES_MODEL);
+                    ? List.of("preprocessor/" + TextPreprocessor.RES_MODEL, "resolver/" + AttachmentResolver.RES_MODEL,
+                            "coordination/" + CoordinationResolver.RES_MODEL)
+                    : List.of("resolver/" + AttachmentResolver.RES_MODEL, "coordination/" + CoordinationResolver.RES_MODEL);
             assertEquals(keys, java.util.Arrays.stream(bindings).map(ExternalResourceBinding::getKey).toList(), name);
             for (ExternalResourceBinding b : bindings) {
                 assertEquals(resources.getExternalResources()[0].getName(), b.getResourceName(), name);
@@ -183,7 +198,10 @@ class EngineDescriptorTest {
                     ((AnalysisEngineDescription) resolver).getAnnotatorImplementationName(), name);
             String[] flow = ((org.apache.uima.analysis_engine.metadata.FixedFlow) aggregate.getAnalysisEngineMetaData()
                     .getFlowConstraints()).getFixedFlow();
-            assertEquals("resolver", flow[flow.length - 1], name + ": the resolver runs last");
+            assertEquals("resolver", flow[flow.length - 2], name + ": the attachment resolver runs before the coordination resolver");
+            assertEquals("coordination", flow[flow.length - 1], name + ": the coordination resolver runs last");
+            assertEquals(CoordinationResolver.class.getName(), ((AnalysisEngineDescription) aggregate
+                    .getDelegateAnalysisEngineSpecifiers().get("coordination")).getAnnotatorImplementationName(), name);
             assertEquals(aggregate.getDelegateAnalysisEngineSpecifiers().size(), flow.length, name + ": every delegate runs");
         }
     }
@@ -202,6 +220,29 @@ class EngineDescriptorTest {
         assertEquals(key, dependencies[0].getKey());
         assertEquals(ModelHolder.class.getName(), dependencies[0].getInterfaceName());
         assertTrue(dependencies[0].isOptional(), "the model resource is optional");
+    }
+
+    /** The coordination descriptor alone after the preprocessor, its model resource unbound: no attachment engine needed. */
+    @Test
+    void coordinationDescriptorRunsWithPlainUimaAlone() throws Exception {
+        AnalysisEngine preprocessor = UIMAFramework.produceAnalysisEngine(byName(PREPROCESSOR));
+        AnalysisEngine coordination = UIMAFramework.produceAnalysisEngine(byName(COORDINATION));
+        CAS cas = coordination.newCAS();
+        cas.setDocumentText(BEARINGS_ENTRY);
+        preprocessor.process(cas);
+        coordination.process(cas);
+        List<CoordinationDecision> decisions = cas.getJCas().select(CoordinationDecision.class).asList();
+        assertEquals(1, decisions.size(), "one coordinator in: " + BEARINGS_ENTRY);
+        CoordinationChecks.assertSane(decisions.get(0));
+        assertEquals("and", decisions.get(0).getCoordinator().getCoveredText());
+        assertEquals(0, cas.getJCas().select(AttachmentDecision.class).asList().size(), "no attachment engine ran");
+    }
+
+    @Test
+    void coordinationDescriptorAgreesWithItsClass() throws Exception {
+        AnalysisEngineDescription xml = byName(COORDINATION);
+        assertAgrees(xml, CoordinationResolver.class);
+        assertOptionalModelDependency(xml, CoordinationResolver.RES_MODEL);
     }
 
     @Test

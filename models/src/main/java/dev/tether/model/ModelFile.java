@@ -1,6 +1,7 @@
 package dev.tether.model;
 
 import dev.tether.attachment.AttachmentRanker;
+import dev.tether.coordination.CoordinationRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.io.AtomicFileWriter;
@@ -43,8 +44,10 @@ import java.util.zip.InflaterInputStream;
  * {@code head-choice} (the counts for choosing among all candidate heads), and, when the model has them,
  * {@code source-weights} (how much each source's events count, when some weight is not 1), {@code thesaurus} (a whole
  * thesaurus file, for similarity smoothing),
- * {@code attachment-ranker} (its own version, feature families, feature keys and weights) and {@code tagger} (a
- * part-of-speech tagger, see {@link TaggerSection}, with a version of its own); a reader
+ * {@code attachment-ranker} (its own version, feature families, feature keys and weights), {@code tagger} (a
+ * part-of-speech tagger, see {@link TaggerSection}, with a version of its own) and {@code coordination-ranker}
+ * ({@link CoordinationRanker}: its version, families, coordination counts and two weight sets; a model without it, or
+ * with another version of it, loads and makes no coordination decisions); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -61,6 +64,8 @@ public final class ModelFile {
     private static final String THESAURUS = "thesaurus";
     /** Optional: each source's weight, in source order; written only when some weight is not 1. */
     private static final String SOURCE_WEIGHTS = "source-weights";
+    private static final String COORDINATION_RANKER = "coordination-ranker";
+    private static final java.util.logging.Logger LOG = java.util.logging.Logger.getLogger(ModelFile.class.getName());
 
     private ModelFile() {
     }
@@ -68,7 +73,8 @@ public final class ModelFile {
     /** Writes {@code model} to {@code target} atomically; on failure the target is untouched. */
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
-                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null));
+                model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null),
+                model.coordinationRanker().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -94,6 +100,14 @@ public final class ModelFile {
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus) throws IOException {
         return pack(sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus));
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
+                         CoordinationRanker coordination) throws IOException {
+        Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus);
+        if (coordination != null) sections.put(COORDINATION_RANKER, section(out -> CoordinationRanker.write(coordination, out)));
+        return pack(sections);
     }
 
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
@@ -210,7 +224,21 @@ public final class ModelFile {
                     throw new ModelFormatException(e.getMessage() + " Retrain the model with this version ('tether train --thesaurus').", e);
                 }
             }
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus,
+            CoordinationRanker coordination = null;
+            byte[] coordinationBytes = sections.get(COORDINATION_RANKER);
+            if (coordinationBytes != null) {
+                int version = CoordinationRanker.readVersion(coordinationBytes);
+                if (version == CoordinationRanker.VERSION) {
+                    coordination = CoordinationRanker.read(new DataInputStream(new ByteArrayInputStream(coordinationBytes)));
+                } else {
+                    // A coordination ranker of another version is left out rather than refusing the whole model:
+                    // attachment still works, and engines say that no coordination decisions are written.
+                    LOG.warning(name + " has a coordination ranker of version " + version + "; this build reads version "
+                            + CoordinationRanker.VERSION + ", so the model makes no coordination decisions. Retrain it "
+                            + "with 'tether train --conllu' to get them.");
+                }
+            }
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus, coordination,
                     java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;

@@ -14,6 +14,17 @@ import dev.tether.attachment.LabelledQuadruple;
 import dev.tether.attachment.Quadruple;
 import dev.tether.attachment.ReviewedChoice;
 import dev.tether.candidates.HeadClass;
+import dev.tether.coordination.ConjunctCandidateProposer;
+import dev.tether.coordination.CoordinationCounts;
+import dev.tether.coordination.CoordinationCountsBuilder;
+import dev.tether.coordination.CoordinationExample;
+import dev.tether.coordination.CoordinationFeatureExtractor;
+import dev.tether.coordination.CoordinationFeatureFamily;
+import dev.tether.coordination.CoordinationRanker;
+import dev.tether.coordination.CoordinationRankerTrainer;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.treebank.CoordinationExampleExtractor;
+import dev.tether.treebank.TreebankSentence;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
@@ -65,6 +76,17 @@ public final class ModelTrainer {
     private RankerTrainer rankerTrainer = new RankerTrainer();
     private boolean rankerWanted = true;
     private TaggerSection tagger;
+    private final List<TreebankSentence> coordinationSentences = new ArrayList<>();
+    private Set<CoordinationFeatureFamily> coordinationFamilies = EnumSet.allOf(CoordinationFeatureFamily.class);
+    private Thesaurus coordinationThesaurus;
+    /**
+     * The coordination ranker's trainer: its features are fewer and denser than attachment's, and cross-validation on
+     * EWT train chose the weakest penalty of the attachment grid, so the grid reaches one step further down.
+     */
+    private RankerTrainer coordinationTrainer = new RankerTrainer(COORDINATION_STRENGTHS, RankerTrainer.DEFAULT_FOLDS,
+            new dev.tether.ranking.Lbfgs(400, 1e-7));
+    /** L2 strengths tried for the coordination ranker. */
+    public static final double[] COORDINATION_STRENGTHS = {0.1, 0.3, 1, 3};
     private Thesaurus thesaurus;
 
     /** Counts every quadruple of {@code set}. */
@@ -206,6 +228,33 @@ public final class ModelTrainer {
         return this;
     }
 
+    /**
+     * Gold trees that train the coordination ranker (with their Penn tags, as the attachment examples are read). Its
+     * count features are a jackknife over {@value #JACKKNIFE_FOLDS} contiguous folds of these sentences, like the
+     * attachment ranker's.
+     */
+    public ModelTrainer addCoordinationSentences(List<TreebankSentence> sentences) {
+        coordinationSentences.addAll(sentences);
+        return this;
+    }
+
+    /** The coordination ranker's feature families (all by default); fewer for ablation. */
+    public ModelTrainer coordinationFamilies(Set<CoordinationFeatureFamily> chosen) {
+        if (chosen.isEmpty()) throw new IllegalArgumentException("the coordination ranker needs at least one feature family");
+        this.coordinationFamilies = EnumSet.copyOf(chosen);
+        return this;
+    }
+
+    /**
+     * A thesaurus whose similarities feed the coordination ranker's similarity and composition features at training,
+     * in place of the thesaurus the model carries ({@code train --thesaurus}, which is used when this is not set);
+     * with neither, those features stay off. At run time the ranker reads the model's own thesaurus.
+     */
+    public ModelTrainer coordinationThesaurus(Thesaurus thesaurus) {
+        this.coordinationThesaurus = thesaurus;
+        return this;
+    }
+
     /** The feature families the ranker uses (all by default); fewer for ablation. */
     public ModelTrainer rankerFamilies(Set<AttachmentFeatureFamily> chosen) {
         if (chosen.isEmpty()) throw new IllegalArgumentException("the ranker needs at least one feature family");
@@ -267,13 +316,53 @@ public final class ModelTrainer {
                 }
             }
         }
+        CoordinationRanker coordination = null;
+        if (rankerWanted && !coordinationSentences.isEmpty()) {
+            coordination = trainCoordination();
+        }
+        if (coordination == null && rankerWanted) {
+            for (TetherModel base : baseModels) {
+                if (base.coordinationRanker().isPresent()) coordination = base.coordinationRanker().get();
+            }
+        }
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus);
-            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus,
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination);
+            return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination,
                     ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }
+    }
+
+    /** The coordination ranker from the treebank sentences, null when they hold no usable coordination. */
+    private CoordinationRanker trainCoordination() {
+        int n = coordinationSentences.size();
+        int k = Math.min(JACKKNIFE_FOLDS, n);
+        int[] fold = new int[n];
+        CoordinationCountsBuilder builder = new CoordinationCountsBuilder(k);
+        for (int j = 0; j < n; j++) {
+            fold[j] = (int) ((long) k * j / n);
+            builder.add(coordinationSentences.get(j), fold[j]);
+        }
+        CoordinationCounts all = builder.build();
+        CoordinationFeatureExtractor[] extractors = new CoordinationFeatureExtractor[k];
+        for (int f = 0; f < k; f++) {
+            extractors[f] = new CoordinationFeatureExtractor(all.without(builder.fold(f, all)), coordinationThesaurus(),
+                    normalizer, coordinationFamilies);
+        }
+        CoordinationExampleExtractor examples = new CoordinationExampleExtractor(new ConjunctCandidateProposer());
+        CoordinationRankerTrainer events = new CoordinationRankerTrainer();
+        for (int j = 0; j < n; j++) {
+            for (CoordinationExample e : examples.extract(coordinationSentences.get(j))) events.add(e, extractors[fold[j]]);
+        }
+        RankerModel[] weights = events.train(coordinationTrainer);
+        if (weights == null) return null;
+        return new CoordinationRanker(weights[0], weights[1], coordinationFamilies, all, coordinationThesaurus());
+    }
+
+    /** The thesaurus of the coordination features: the one given for them, else the one the model will carry. */
+    private Thesaurus coordinationThesaurus() {
+        return coordinationThesaurus != null ? coordinationThesaurus : thesaurus;
     }
 
     private RankerModel trainRanker(HeadChoiceCounts lexicon) {

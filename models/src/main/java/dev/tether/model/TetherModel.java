@@ -9,6 +9,7 @@ import dev.tether.attachment.SimilarityBackedOffScorer;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.attachment.HeadChoice;
 import dev.tether.attachment.HeadChoiceScorer;
+import dev.tether.coordination.CoordinationRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.vocabulary.WordNormalizer;
@@ -40,12 +41,21 @@ public final class TetherModel {
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadChoiceScorer headChoiceScorer;
     private final AttachmentRanker attachmentRanker;
+    private final CoordinationRanker coordinationRanker;
     private final Thesaurus thesaurus;
     private final QuadrupleScorer quadrupleScorer;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
                 String id) {
+        this(normalizerVersion, sources, quadruples, headChoice, attachmentRanker, tagger, thesaurus, null, id);
+    }
+
+    /** {@code coordinationRanker} is given the model's thesaurus (if any) for its similarity features. */
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
+                CoordinationRanker coordinationRanker, String id) {
+        this.coordinationRanker = coordinationRanker == null ? null : coordinationRanker.withThesaurus(thesaurus);
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
         this.quadruples = quadruples;
@@ -68,6 +78,13 @@ public final class TetherModel {
     public HeadChoiceScorer headChoiceScorer() { return headChoiceScorer; }
     /** The learned attachment ranker, present when the model was trained with head-choice examples. */
     public Optional<AttachmentRanker> attachmentRanker() { return Optional.ofNullable(attachmentRanker); }
+
+    /**
+     * The learned coordination ranker, present when the model was trained from treebanks with this version of
+     * Tether; without it no coordination decisions are made. It reads the model's thesaurus ({@link #thesaurus()}),
+     * if the model has one, for its similarity features.
+     */
+    public Optional<CoordinationRanker> coordinationRanker() { return Optional.ofNullable(coordinationRanker); }
 
     /** The model's head choice: the ranker's when it has one, else the count-based score's. */
     public HeadChoice chooseHead(AttachmentQuery q) {

@@ -135,6 +135,7 @@ public final class ConlluReader implements Closeable {
         final List<String> upos = new ArrayList<>();
         final List<String> xpos = new ArrayList<>();
         final List<String> relations = new ArrayList<>();
+        final List<String> enhanced = new ArrayList<>();
         final IntList heads = new IntList();
         final IntList lines = new IntList();
         // Surface tokens: a multiword token or a word outside any range.
@@ -210,6 +211,7 @@ public final class ConlluReader implements Closeable {
             xpos.add(c[4]);
             heads.add(head - 1);
             relations.add(c[7]);
+            enhanced.add(c[8].isEmpty() ? "_" : c[8]);
             lines.add(at);
             if (word > rangeEnd) addSurface(c[1], word - 1, word - 1, at, c[9]);
         }
@@ -252,7 +254,7 @@ public final class ConlluReader implements Closeable {
             align(sentenceText, begins, ends);
             return new TreebankSentence(name, sentenceText, forms.toArray(new String[0]), upos.toArray(new String[0]),
                     xpos.toArray(new String[0]), heads.toArray(), relations.toArray(new String[0]), begins, ends,
-                    lines.toArray());
+                    lines.toArray(), enhanced.toArray(new String[0]));
         }
 
         private String rebuildText() {

@@ -19,6 +19,7 @@ public final class TreebankSentence {
     private final int[] begins;
     private final int[] ends;
     private final int[] lines;
+    private final String[] enhanced;
 
     /**
      * @param source    the file the sentence came from, as named in messages
@@ -30,7 +31,19 @@ public final class TreebankSentence {
      */
     public TreebankSentence(String source, String text, String[] forms, String[] upos, String[] xpos, int[] heads,
                             String[] relations, int[] begins, int[] ends, int[] lines) {
+        this(source, text, forms, upos, xpos, heads, relations, begins, ends, lines, null);
+    }
+
+    /**
+     * As above, with the enhanced graph: column 9 (DEPS) of each word as written ({@code 4:nsubj|7:conj:and}, or
+     * {@code _}); {@code null} when the source has none.
+     */
+    public TreebankSentence(String source, String text, String[] forms, String[] upos, String[] xpos, int[] heads,
+                            String[] relations, int[] begins, int[] ends, int[] lines, String[] enhanced) {
         int n = forms.length;
+        if (enhanced != null && enhanced.length != n) {
+            throw new IllegalArgumentException(source + ": the enhanced graph has " + enhanced.length + " entries for " + n + " words");
+        }
         if (upos.length != n || xpos.length != n || heads.length != n || relations.length != n || begins.length != n
                 || ends.length != n || lines.length != n) {
             throw new IllegalArgumentException(source + ": the columns of a sentence differ in length");
@@ -54,6 +67,7 @@ public final class TreebankSentence {
         this.begins = begins.clone();
         this.ends = ends.clone();
         this.lines = lines.clone();
+        this.enhanced = enhanced == null ? null : enhanced.clone();
     }
 
     public String source() { return source; }
@@ -70,6 +84,49 @@ public final class TreebankSentence {
     public int end(int i) { return ends[i]; }
     /** 1-based line of word {@code i} in the source file. */
     public int line(int i) { return lines[i]; }
+    /** Whether the sentence carries an enhanced graph (column 9 of CoNLL-U). */
+    public boolean hasEnhancedGraph() { return enhanced != null; }
+
+    /**
+     * Whether the enhanced graph (column 9) makes word {@code head} (0-based) a head of word {@code i}, with a relation
+     * whose universal part (before the first colon) is {@code relation}, or with any relation when {@code relation}
+     * is {@code null}. Empty nodes ({@code 5.1}) are not words and never match. False without an enhanced graph.
+     */
+    public boolean hasEnhancedHead(int i, int head, String relation) {
+        if (enhanced == null) return false;
+        String deps = enhanced[i];
+        if (deps.equals("_")) return false;
+        int at = 0;
+        while (at < deps.length()) {
+            int bar = deps.indexOf('|', at);
+            int end = bar < 0 ? deps.length() : bar;
+            int colon = deps.indexOf(':', at);
+            if (colon > at && colon < end) {
+                int id = parseWordId(deps, at, colon);
+                if (id == head + 1) {
+                    if (relation == null) return true;
+                    int next = deps.indexOf(':', colon + 1);
+                    int relEnd = next < 0 || next > end ? end : next;
+                    if (deps.regionMatches(colon + 1, relation, 0, relation.length()) && relEnd - colon - 1 == relation.length()) return true;
+                }
+            }
+            at = end + 1;
+        }
+        return false;
+    }
+
+    /** The word id in {@code s[from, to)}, -1 for an empty node or anything that is not a whole number. */
+    private static int parseWordId(String s, int from, int to) {
+        int v = 0;
+        for (int k = from; k < to; k++) {
+            char ch = s.charAt(k);
+            if (ch < '0' || ch > '9') return -1;
+            v = v * 10 + (ch - '0');
+            if (v > 10_000_000) return -1;
+        }
+        return v;
+    }
+
     /** Where word {@code i} was read, as "file:line". */
     public String location(int i) { return source + ":" + lines[i]; }
 

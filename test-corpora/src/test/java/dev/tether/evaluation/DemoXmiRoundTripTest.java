@@ -62,12 +62,21 @@ class DemoXmiRoundTripTest {
 
         List<AttachmentDecision> decisions = new ArrayList<>(JCasUtil.select(jcas, AttachmentDecision.class));
         List<JsonNode> lines = new ArrayList<>();
+        int coordinationLines = 0;
         ObjectMapper json = new ObjectMapper();
-        for (String line : Files.readAllLines(ledger, StandardCharsets.UTF_8)) lines.add(json.readTree(line));
+        for (String line : Files.readAllLines(ledger, StandardCharsets.UTF_8)) {
+            JsonNode record = json.readTree(line);
+            String kind = record.path("kind").asText();
+            if ("attachment".equals(kind)) lines.add(record);
+            else if ("coordination".equals(kind)) coordinationLines++;
+            else throw new AssertionError("ledger line of unknown kind '" + kind + "': " + line);
+        }
+        assertEquals(coordinationLines, JCasUtil.select(jcas, dev.tether.type.CoordinationDecision.class).size(),
+                "coordination decisions in the XMI vs coordination lines in the ledger");
         // Every preposition of the document heads a phrase ("for", "from", "in", "of", "after", "on", "with", ...),
         // so an empty result would mean decisions were lost on the way.
         assertFalse(decisions.isEmpty(), "no decisions in the loaded XMI");
-        assertEquals(lines.size(), decisions.size(), "decisions in the XMI vs lines in the ledger");
+        assertEquals(lines.size(), decisions.size(), "attachment decisions in the XMI vs attachment lines in the ledger");
 
         for (int i = 0; i < decisions.size(); i++) {
             AttachmentDecision d = decisions.get(i);

@@ -1,0 +1,209 @@
+package dev.tether.cli;
+
+import dev.tether.spark.SparkJob;
+import dev.tether.spark.SparkMaster;
+import org.apache.spark.SparkConf;
+import org.apache.spark.api.java.JavaSparkContext;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.net.ServerSocket;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The commands on Spark (issue 11). {@code tether annotate --spark local[2]} writes byte for byte what the run on
+ * threads writes: XMI, ledgers, manifest and the run summary (all but its timing); a document that fails fails alone
+ * and is listed the same way; and what cannot work stops the run before any output (a missing input, a master that
+ * cannot be reached, a master that is no master, --threads beside --spark). {@code tether train --raw ... --spark
+ * local[2]} writes the model file byte for byte as the count on threads does, alone and mixed with labelled sources.
+ * One embedded Spark context serves the whole class. Documents are invented maintenance logs of the fictional ferry
+ * operator.
+ */
+class CommandsOnSparkTest {
+    private static final List<String> LOGS = List.of(
+            "Replaced the cracked gasket on the cooling pump with a spare from the stores.\n",
+            "Found a slow leak in the fuel line near the starboard engine.\n",
+            "The chief engineer signed the work order after the sea trial.\n",
+            "Greased the hinges of the loading ramp before the morning sailing.\n",
+            "Checked the mooring lines for chafe at the bow fairlead and logged it in the deck book.\n",
+            "Fitted a new impeller to the bilge pump of the Tern Hollow with help from the yard.\n",
+            "Tightened the bolts on the ramp with a torque wrench from the workshop.\n",
+            "Logged the running hours of both engines in the engine room book.\n",
+            "Painted the hull near the waterline with primer before the survey.\n");
+
+    private static JavaSparkContext spark;
+
+    @TempDir
+    Path dir;
+    private Path in;
+
+    @BeforeAll
+    static void startSpark() {
+        spark = new JavaSparkContext(new SparkConf().setMaster(SparkMaster.parse("local[2]").url()).setAppName("test")
+                .set("spark.ui.enabled", "false").set("spark.driver.bindAddress", "127.0.0.1")
+                .set("spark.driver.host", "127.0.0.1"));
+        SparkJob.lend(spark);
+    }
+
+    @AfterAll
+    static void stopSpark() {
+        SparkJob.lend(null);
+        spark.stop();
+    }
+
+    @BeforeEach
+    void writeLogs() throws Exception {
+        in = Files.createDirectory(dir.resolve("logs"));
+        for (int i = 0; i < LOGS.size(); i++) {
+            Files.writeString(in.resolve(String.format("log-%02d.txt", i + 1)), LOGS.get(i), StandardCharsets.UTF_8);
+        }
+    }
+
+    private CommandLineRun annotate(Path out, String... more) {
+        List<String> args = new ArrayList<>(List.of("annotate", "--in", in.toString(), "--out", out.toString()));
+        args.addAll(List.of(more));
+        return CommandLineRun.of(args.toArray(new String[0]));
+    }
+
+    /** The summary's text without its one timing line. */
+    private static String summaryWithoutTiming(Path out) throws Exception {
+        String s = Files.readString(out.resolve(AnnotateCommand.SUMMARY));
+        assertTrue(s.contains("\"seconds\" : "), s);
+        return s.replaceAll("\"seconds\" : [0-9.]+", "\"seconds\" : _");
+    }
+
+    @Test
+    void sparkWritesTheBytesOfTheRunOnThreadsIncludingTheSummary() throws Exception {
+        Path threads = dir.resolve("threads");
+        Path onSpark = dir.resolve("spark");
+        CommandLineRun a = annotate(threads, "--threads", "2");
+        CommandLineRun b = annotate(onSpark, "--spark", "local[2]");
+        assertEquals(Tether.OK, a.exitCode(), a::toString);
+        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertEquals(OutputFiles.of(threads), OutputFiles.of(onSpark));
+        assertEquals(LOGS.size() * 2 + 1, OutputFiles.of(onSpark).size()); // xmi + ledger per document, the manifest
+        assertEquals(summaryWithoutTiming(threads), summaryWithoutTiming(onSpark));
+        assertTrue(b.out().contains("annotated 9 of 9 documents"), b::toString);
+        // Run again on Spark into the same folder: every document is reused, the bytes stay.
+        CommandLineRun again = annotate(onSpark, "--spark", "local[2]");
+        assertEquals(Tether.OK, again.exitCode(), again::toString);
+        assertTrue(again.out().contains("(9 reused from an earlier run)"), again::toString);
+        assertEquals(OutputFiles.of(threads), OutputFiles.of(onSpark));
+    }
+
+    @Test
+    void aDocumentThatFailsFailsAloneAndIsListedAsOnThreads() throws Exception {
+        Files.write(in.resolve("log-05.txt"), new byte[] {'o', 'k', 0, 1, 2}); // binary
+        Files.write(in.resolve("log-07.txt"), new byte[] {'a', (byte) 0xC3, '(', '\n'}); // not UTF-8
+        Path threads = dir.resolve("threads");
+        Path onSpark = dir.resolve("spark");
+        CommandLineRun a = annotate(threads, "--threads", "2");
+        CommandLineRun b = annotate(onSpark, "--spark", "local[2]");
+        assertEquals(Tether.SOME_FAILED, a.exitCode(), a::toString);
+        assertEquals(Tether.SOME_FAILED, b.exitCode(), b::toString);
+        assertTrue(b.out().contains("2 documents failed"), b::toString);
+        assertTrue(b.out().contains("log-05.txt: ") && b.out().contains("log-07.txt: "), b::toString);
+        assertEquals(OutputFiles.of(threads), OutputFiles.of(onSpark));
+        assertEquals(summaryWithoutTiming(threads), summaryWithoutTiming(onSpark));
+        assertFalse(Files.exists(onSpark.resolve("log-05.txt.xmi")));
+    }
+
+    /** Raw text for training: each log sentence in many documents, so that counts reach above one. */
+    private Path writeRawText() throws Exception {
+        Path raw = Files.createDirectory(dir.resolve("raw"));
+        for (int d = 0; d < 24; d++) {
+            StringBuilder text = new StringBuilder();
+            for (int k = 0; k < 5; k++) text.append(LOGS.get((d * 5 + k) % LOGS.size()).strip()).append(' ');
+            Files.writeString(raw.resolve(String.format("shift-%02d.txt", d)), text.append('\n').toString());
+        }
+        Files.write(raw.resolve("shift-99.txt"), new byte[] {'o', 'k', 0, 1}); // skipped as binary, either way
+        return raw;
+    }
+
+    @Test
+    void trainOnSparkWritesTheModelBytesOfTheCountOnThreads() throws Exception {
+        Path raw = writeRawText();
+        Path onThreads = dir.resolve("threads.tether");
+        Path onSpark = dir.resolve("spark.tether");
+        CommandLineRun a = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onThreads.toString(), "--threads", "2");
+        CommandLineRun b = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onSpark.toString(), "--spark", "local[2]");
+        assertEquals(Tether.OK, a.exitCode(), a::toString);
+        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertTrue(b.out().contains("raw text: 24 documents") && b.out().contains("skipped 1 documents (1 binary)"), b::toString);
+        assertTrue(Files.size(onSpark) > 0);
+        assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark));
+    }
+
+    @Test
+    void trainOnSparkMixedWithLabelledSourcesWritesTheSameModel() throws Exception {
+        Path raw = writeRawText();
+        Path quadruples = FerryLogs.write(dir, "training.txt", FerryLogs.TRAINING);
+        Path treebank = dir.resolve("six.conllu");
+        try (var in = getClass().getResourceAsStream("ewt-dev-six-sentences.conllu")) {
+            Files.copy(in, treebank);
+        }
+        List<String> common = List.of("train", "--raw", raw.toString(), "--quadruples", quadruples.toString(),
+                "--conllu", treebank.toString(), "--no-tagger", "--out");
+        List<String> a = new ArrayList<>(common);
+        a.add(dir.resolve("threads.tether").toString());
+        List<String> b = new ArrayList<>(common);
+        b.addAll(List.of(dir.resolve("spark.tether").toString(), "--spark", "local[2]"));
+        CommandLineRun ra = CommandLineRun.of(a.toArray(new String[0]));
+        CommandLineRun rb = CommandLineRun.of(b.toArray(new String[0]));
+        assertEquals(Tether.OK, ra.exitCode(), ra::toString);
+        assertEquals(Tether.OK, rb.exitCode(), rb::toString);
+        assertArrayEquals(Files.readAllBytes(dir.resolve("threads.tether")), Files.readAllBytes(dir.resolve("spark.tether")));
+    }
+
+    @Test
+    void anInputThatDoesNotExistStopsTheRunBeforeAnyOutput() {
+        Path out = dir.resolve("out");
+        CommandLineRun r = CommandLineRun.of("annotate", "--in", dir.resolve("no-such-folder").toString(), "--out",
+                out.toString(), "--spark", "local[2]");
+        assertEquals(Tether.INPUT, r.exitCode(), r::toString);
+        assertTrue(r.err().contains("no-such-folder") && r.err().contains("does not exist"), r::toString);
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void aMasterThatCannotBeReachedStopsTheRunBeforeAnyOutput() throws Exception {
+        int port;
+        try (ServerSocket s = new ServerSocket(0, 1, java.net.InetAddress.getLoopbackAddress())) {
+            port = s.getLocalPort(); // free once closed: nothing listens there
+        }
+        SparkJob.lend(null); // a context for this master would be started, as from the command line
+        try {
+            Path out = dir.resolve("out");
+            CommandLineRun r = annotate(out, "--spark", "spark://127.0.0.1:" + port);
+            assertEquals(Tether.INPUT, r.exitCode(), r::toString);
+            assertTrue(r.err().contains("spark://127.0.0.1:" + port + " cannot be reached"), r::toString);
+            assertFalse(Files.exists(out));
+        } finally {
+            SparkJob.lend(spark);
+        }
+    }
+
+    @Test
+    void aMasterThatIsNoMasterAndThreadsBesideSparkAreUsageErrors() {
+        Path out = dir.resolve("out");
+        CommandLineRun wrong = annotate(out, "--spark", "locl[2]");
+        assertEquals(Tether.USAGE, wrong.exitCode(), wrong::toString);
+        assertTrue(wrong.err().contains("'locl[2]' is not a Spark master"), wrong::toString);
+        CommandLineRun both = annotate(out, "--spark", "local[2]", "--threads", "2");
+        assertEquals(Tether.USAGE, both.exitCode(), both::toString);
+        assertTrue(both.err().contains("--threads and --spark exclude each other"), both::toString);
+        assertFalse(Files.exists(out));
+    }
+}

@@ -1,0 +1,148 @@
+package dev.tether.coordination;
+
+import dev.tether.ranking.CandidateFeatures;
+import dev.tether.ranking.RankerModel;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.vocabulary.WordNormalizer;
+
+import java.io.DataInput;
+import java.io.DataOutput;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Ranks the bracketings of a coordination with two learned conditional log-linear models of the generic ranker
+ * ({@link dev.tether.ranking}): one over the candidate pairs of conjunct heads, one over "shared" against "not
+ * shared" for each modifier around the chosen pair. Features come from {@link CoordinationFeatureExtractor} over the
+ * model's coordination counts and, when one is given, a thesaurus ({@link #withThesaurus}; without one the
+ * similarity features are absent, and a ranker trained without one never weighs them). Immutable and thread-safe
+ * (one reusable feature buffer per thread).
+ */
+public final class CoordinationRanker {
+    /** Version of the stored ranker (templates and layout); a model with another writes no coordination decisions. */
+    public static final int VERSION = 1;
+
+    private final RankerModel pairWeights;
+    private final RankerModel scopeWeights;
+    private final Set<CoordinationFeatureFamily> families;
+    private final CoordinationCounts counts;
+    private final Thesaurus thesaurus;
+    private final CoordinationFeatureExtractor extractor;
+    private final ThreadLocal<CandidateFeatures> buffers = ThreadLocal.withInitial(CandidateFeatures::new);
+
+    public CoordinationRanker(RankerModel pairWeights, RankerModel scopeWeights, Set<CoordinationFeatureFamily> families,
+                              CoordinationCounts counts, Thesaurus thesaurus) {
+        this.pairWeights = pairWeights;
+        this.scopeWeights = scopeWeights;
+        this.families = EnumSet.copyOf(families);
+        this.counts = counts;
+        this.thesaurus = thesaurus;
+        this.extractor = new CoordinationFeatureExtractor(counts, thesaurus, new WordNormalizer(), families);
+    }
+
+    /** The same weights with features read from {@code t} (null: none). */
+    public CoordinationRanker withThesaurus(Thesaurus t) {
+        return new CoordinationRanker(pairWeights, scopeWeights, families, counts, t);
+    }
+
+    public RankerModel pairWeights() { return pairWeights; }
+    public RankerModel scopeWeights() { return scopeWeights; }
+    public CoordinationCounts counts() { return counts; }
+    public Set<CoordinationFeatureFamily> families() { return EnumSet.copyOf(families); }
+    public boolean hasThesaurus() { return thesaurus != null; }
+
+    /** Ranks the pairs of {@code q} and decides the scope of the modifiers of the best {@code k}. */
+    public CoordinationChoice choose(CoordinationQuery q, int k) {
+        CoordinatorCandidates cc = q.candidates();
+        if (cc.size() == 0) throw new IllegalArgumentException("no candidate conjuncts for the coordinator at token " + cc.coordinator());
+        CandidateFeatures f = buffers.get();
+        extractor.extractPairs(q, f);
+        double[] p = new double[cc.size()];
+        pairWeights.probabilities(f, p);
+        int[] order = order(p);
+        int readings = Math.min(Math.max(1, k), order.length);
+        double[][] shared = new double[readings][];
+        double[] two = new double[2];
+        for (int r = 0; r < readings; r++) {
+            ConjunctPair pair = cc.pair(order[r]);
+            shared[r] = new double[pair.modifiers().length];
+            for (int m = 0; m < shared[r].length; m++) {
+                extractor.extractScope(q, pair, pair.modifiers()[m], f);
+                scopeWeights.probabilities(f, two);
+                shared[r][m] = two[1];
+            }
+        }
+        return new CoordinationChoice(p, order, shared);
+    }
+
+    /** Candidate indexes by descending probability; ties keep candidate order (nearest first). */
+    static int[] order(double[] p) {
+        Integer[] o = new Integer[p.length];
+        for (int i = 0; i < o.length; i++) o[i] = i;
+        java.util.Arrays.sort(o, (a, b) -> p[a] != p[b] ? Double.compare(p[b], p[a]) : Integer.compare(a, b));
+        int[] out = new int[o.length];
+        for (int i = 0; i < o.length; i++) out[i] = o[i];
+        return out;
+    }
+
+    /** One feature's pull towards the chosen pair against the runner-up. */
+    public record Reason(String text, double weight) {
+    }
+
+    /** The features that weighed most for the best pair of {@code choice} against its runner-up, at most {@code limit}. */
+    public List<Reason> explain(CoordinationQuery q, CoordinationChoice choice, int limit) {
+        List<Reason> reasons = new ArrayList<>();
+        if (choice.readings() < 2) return reasons;
+        CandidateFeatures f = new CandidateFeatures();
+        extractor.extractPairs(q, f);
+        int best = choice.pair(0);
+        int second = choice.pair(1);
+        java.util.TreeMap<Long, Double> pull = new java.util.TreeMap<>();
+        for (int e = f.from(best); e < f.to(best); e++) pull.merge(f.key(e), pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);
+        for (int e = f.from(second); e < f.to(second); e++) pull.merge(f.key(e), -pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);
+        List<java.util.Map.Entry<Long, Double>> entries = new ArrayList<>(pull.entrySet());
+        entries.sort((a, b) -> Double.compare(b.getValue(), a.getValue()));
+        for (java.util.Map.Entry<Long, Double> e : entries) {
+            if (reasons.size() == limit || e.getValue() <= 1e-9) break;
+            reasons.add(new Reason(CoordinationFeature.of(e.getKey()).describe(e.getKey()), e.getValue()));
+        }
+        return reasons;
+    }
+
+    public static void write(CoordinationRanker r, DataOutput out) throws IOException {
+        out.writeInt(VERSION);
+        out.writeInt(CoordinationFeatureFamily.mask(r.families));
+        r.counts.write(out);
+        r.pairWeights.write(out);
+        r.scopeWeights.write(out);
+    }
+
+    /** What {@link #write} wrote; the version is checked by the caller ({@link #readVersion}). */
+    public static CoordinationRanker read(DataInput in) throws IOException {
+        int version = in.readInt();
+        if (version != VERSION) throw new IOException("coordination ranker version " + version + ", this build reads " + VERSION);
+        Set<CoordinationFeatureFamily> families = CoordinationFeatureFamily.fromMask(in.readInt());
+        CoordinationCounts counts = CoordinationCounts.read(in);
+        RankerModel pairs = RankerModel.read(in);
+        RankerModel scope = RankerModel.read(in);
+        for (int i = 0; i < pairs.space().size(); i++) CoordinationFeature.of(pairs.space().key(i));
+        for (int i = 0; i < scope.space().size(); i++) CoordinationFeature.of(scope.space().key(i));
+        return new CoordinationRanker(pairs, scope, families, counts, null);
+    }
+
+    public static int readVersion(byte[] section) {
+        if (section.length < 4) return -1;
+        return ((section[0] & 0xff) << 24) | ((section[1] & 0xff) << 16) | ((section[2] & 0xff) << 8) | (section[3] & 0xff);
+    }
+
+    @Override public boolean equals(Object o) {
+        if (!(o instanceof CoordinationRanker)) return false;
+        CoordinationRanker r = (CoordinationRanker) o;
+        return pairWeights.equals(r.pairWeights) && scopeWeights.equals(r.scopeWeights) && families.equals(r.families)
+                && counts.equals(r.counts);
+    }
+    @Override public int hashCode() { return pairWeights.hashCode() * 31 + scopeWeights.hashCode(); }
+}

@@ -1,0 +1,97 @@
+package dev.tether.coordination;
+
+import dev.tether.candidates.HeadClass;
+import org.junit.jupiter.api.Test;
+
+import java.util.Arrays;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The conjunct candidates on invented ferry-maintenance sentences, hand-tagged. */
+class ConjunctCandidateProposerTest {
+    private final ConjunctCandidateProposer proposer = new ConjunctCandidateProposer();
+
+    private static final TaggedWords BEARINGS = TaggedWords.of(
+            "Inspectors/NNS checked/VBD the/DT worn/JJ bearings/NNS and/CC seals/NNS on/IN the/DT pump/NN ./.");
+
+    @Test
+    void nominalCoordinationOffersTheNounPairWithItsPremodifierAndPhraseInQuestion() {
+        List<CoordinatorCandidates> all = proposer.proposeAll(BEARINGS.words, BEARINGS.tags);
+        assertEquals(1, all.size());
+        CoordinatorCandidates c = all.get(0);
+        assertEquals(BEARINGS.index("and"), c.coordinator());
+        int i = c.indexOf(BEARINGS.index("bearings"), BEARINGS.index("seals"));
+        assertTrue(i >= 0, "bearings + seals among the candidates");
+        ConjunctPair p = c.pair(i);
+        assertEquals(HeadClass.NOUN, p.leftClass());
+        assertEquals(HeadClass.NOUN, p.rightClass());
+        List<ScopeCandidate> m = Arrays.asList(p.modifiers());
+        assertTrue(m.stream().anyMatch(s -> s.kind() == ModifierKind.PREMODIFIER && s.token() == BEARINGS.index("worn")), m::toString);
+        assertTrue(m.stream().anyMatch(s -> s.kind() == ModifierKind.PREPOSITIONAL && s.token() == BEARINGS.index("pump")), m::toString);
+        // "Inspectors" (the other noun before) is a candidate too: the ranker, not a rule, prefers "bearings".
+        assertTrue(c.indexOf(BEARINGS.index("Inspectors"), BEARINGS.index("seals")) >= 0);
+    }
+
+    @Test
+    void clauseAfterTheCoordinatorOffersItsVerbAndTheSubjectInQuestion() {
+        TaggedWords s = TaggedWords.of("The/DT crew/NN inspected/VBD the/DT hull/NN and/CC replaced/VBD the/DT anodes/NNS ./.");
+        CoordinatorCandidates c = proposer.proposeAll(s.words, s.tags).get(0);
+        int i = c.indexOf(s.index("inspected"), s.index("replaced"));
+        assertTrue(i >= 0);
+        ConjunctPair p = c.pair(i);
+        assertTrue(Arrays.stream(p.modifiers()).anyMatch(m -> m.kind() == ModifierKind.SUBJECT && m.token() == s.index("crew")));
+        assertTrue(Arrays.stream(p.modifiers()).anyMatch(m -> m.kind() == ModifierKind.OBJECT && m.token() == s.index("anodes")));
+    }
+
+    @Test
+    void aCoordinatorAtEitherEndOfTheSentenceGetsNoCandidates() {
+        TaggedWords start = TaggedWords.of("And/CC the/DT ramp/NN jammed/VBD");
+        TaggedWords end = TaggedWords.of("Check/VB the/DT ramp/NN and/CC");
+        assertTrue(proposer.proposeAll(start.words, start.tags).isEmpty());
+        assertTrue(proposer.proposeAll(end.words, end.tags).isEmpty());
+    }
+
+    @Test
+    void tenCoordinatorsAndNestingStayBoundedPerCoordinator() {
+        StringBuilder b = new StringBuilder("Deckhands/NNS cleaned/VBD");
+        for (int i = 0; i < 10; i++) b.append(" valve").append(i).append("/NN and/CC gasket").append(i).append("/NN");
+        b.append(" ./.");
+        TaggedWords s = TaggedWords.of(b.toString());
+        List<CoordinatorCandidates> all = proposer.proposeAll(s.words, s.tags);
+        assertEquals(10, all.size());
+        for (CoordinatorCandidates c : all) assertTrue(c.size() <= bound(), () -> "candidates " + c.size());
+        // Nested: "pumps and (valves or seals)": both coordinators get their own candidates.
+        TaggedWords nested = TaggedWords.of("Greased/VBD pumps/NNS and/CC valves/NNS or/CC seals/NNS ./.");
+        List<CoordinatorCandidates> two = proposer.proposeAll(nested.words, nested.tags);
+        assertEquals(2, two.size());
+        assertTrue(two.get(1).indexOf(nested.index("valves"), nested.index("seals")) >= 0);
+        assertTrue(two.get(1).indexOf(nested.index("pumps"), nested.index("seals")) >= 0);
+    }
+
+    @Test
+    void aFiftyThousandTokenSentenceHasBoundedCandidatesAndSaysWhenCapsBit() {
+        int n = 50_000;
+        String[] w = new String[n];
+        String[] t = new String[n];
+        for (int i = 0; i < n; i++) {
+            boolean coordinator = i % 5 == 4;
+            w[i] = coordinator ? "and" : "bolt" + (i % 97);
+            t[i] = coordinator ? "CC" : "NN";
+        }
+        long start = System.nanoTime();
+        List<CoordinatorCandidates> all = proposer.proposeAll(w, t);
+        long millis = (System.nanoTime() - start) / 1_000_000;
+        assertEquals(n / 5 - (t[n - 1].equals("CC") ? 1 : 0), all.size());
+        long capped = all.stream().filter(c -> c.capped() > 0).count();
+        for (CoordinatorCandidates c : all) assertTrue(c.size() <= bound());
+        assertTrue(capped > all.size() / 2, "the window cap bites in a run-on sentence and is counted: " + capped);
+        System.out.printf("50,000-token sentence: %,d coordinators, %,d capped, %d ms%n", all.size(), capped, millis);
+    }
+
+    private static int bound() {
+        return ConjunctCandidateProposer.MAX_RIGHT
+                * (ConjunctCandidateProposer.MAX_SAME_CLASS + 3 * ConjunctCandidateProposer.MAX_OTHER_CLASS);
+    }
+}

@@ -1,0 +1,65 @@
+package dev.tether.coordination;
+
+import dev.tether.evaluation.Accuracy;
+import dev.tether.evaluation.CoordinationEvaluation;
+import dev.tether.evaluation.CoordinationGoldTagEvaluator;
+import dev.tether.model.ModelTrainer;
+import dev.tether.model.TetherModel;
+import dev.tether.treebank.ConlluReader;
+import dev.tether.treebank.TreebankSentence;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Trains only the coordination ranker from a treebank and scores it with gold tags on another (a development loop;
+ * the figures of record come from {@code tether evaluate}). Run by hand with the models classpath:
+ * {@code java -cp ... dev.tether.coordination.CoordinationDevMeasurement TRAIN DEV}.
+ */
+public final class CoordinationDevMeasurement {
+    public static void main(String[] args) throws Exception {
+        List<TreebankSentence> train = ConlluReader.readAll(Path.of(args[0]));
+        List<TreebankSentence> dev = ConlluReader.readAll(Path.of(args[1]));
+        long start = System.nanoTime();
+        TetherModel model = new ModelTrainer().addCoordinationSentences(train).build();
+        CoordinationRanker ranker = model.coordinationRanker().orElseThrow();
+        System.out.printf("trained in %.1f s: %d pair decisions, %d scope decisions, l2 %s / %s%n",
+                (System.nanoTime() - start) / 1e9, ranker.pairWeights().decisions(), ranker.scopeWeights().decisions(),
+                ranker.pairWeights().l2(), ranker.scopeWeights().l2());
+        CoordinationEvaluation e = new CoordinationEvaluation();
+        CoordinationGoldTagEvaluator evaluator = new CoordinationGoldTagEvaluator();
+        for (TreebankSentence s : dev) {
+            evaluator.add(s, ranker, e);
+            if (System.getenv("SHOW") != null) show(s, ranker);
+        }
+        System.out.printf("heads %s, nearest %s, spans %s, scope %s (always %s, never %s), coverage %s%n",
+                f(e.heads()), f(e.nearestOfClass()), f(e.spans()), f(e.scope()), f(e.alwaysShared()), f(e.neverShared()),
+                f(e.scopeCoverage()));
+        for (Map.Entry<String, Accuracy[]> r : e.byClass().entrySet()) {
+            System.out.printf("  %-6s %s  nearest %s%n", r.getKey(), f(r.getValue()[0]), f(r.getValue()[1]));
+        }
+    }
+
+    /** Prints the wrong head choices whose gold pair was among the candidates. */
+    private static void show(TreebankSentence s, CoordinationRanker ranker) {
+        java.util.Map<Integer, CoordinatorCandidates> by = new java.util.HashMap<>();
+        for (CoordinatorCandidates c : new ConjunctCandidateProposer().proposeAll(s.forms(), s.xposTags())) by.put(c.coordinator(), c);
+        for (dev.tether.treebank.GoldCoordination g : new dev.tether.treebank.GoldCoordinationExtractor().extract(s)) {
+            CoordinatorCandidates c = by.get(g.coordinator());
+            if (c == null || c.indexOf(g.left(), g.right()) < 0) continue;
+            CoordinationChoice choice = ranker.choose(new CoordinationQuery(s.forms(), s.xposTags(), c), 1);
+            ConjunctPair p = c.pair(choice.pair(0));
+            if (p.left() == g.left() && p.right() == g.right()) continue;
+            StringBuilder b = new StringBuilder("WRONG gold " + s.form(g.left()) + "+" + s.form(g.right()) + " got " + s.form(p.left()) + "+" + s.form(p.right()) + " :: ");
+            for (int k = Math.max(0, Math.min(g.left(), p.left()) - 2); k < Math.min(s.size(), Math.max(g.right(), p.right()) + 3); k++) {
+                b.append(s.form(k)).append('/').append(s.xpos(k)).append(' ');
+            }
+            System.out.println(b);
+        }
+    }
+
+    private static String f(Accuracy a) {
+        return String.format("%.2f%% (%d/%d)", 100 * a.value(), a.correct(), a.total());
+    }
+}

@@ -1,0 +1,63 @@
+package dev.tether.coordination;
+
+import dev.tether.model.ModelFile;
+import dev.tether.model.ModelTrainer;
+import dev.tether.model.TetherModel;
+import dev.tether.treebank.TreebankSentence;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** Trains the coordination ranker on the invented ferry treebank, saves and loads it, and decides with it. */
+class CoordinationRankerTest {
+    private static List<TreebankSentence> repeated() throws Exception {
+        List<TreebankSentence> ferry = dev.tether.treebank.GoldCoordinationExtractorTest.ferry();
+        List<TreebankSentence> all = new ArrayList<>();
+        for (int i = 0; i < 10; i++) all.addAll(ferry);
+        return all;
+    }
+
+    @Test
+    void aTrainedRankerSurvivesTheModelFileAndPrefersTheTreebanksBracketing(@TempDir Path dir) throws Exception {
+        TetherModel model = new ModelTrainer().addCoordinationSentences(repeated()).build();
+        CoordinationRanker ranker = model.coordinationRanker().orElseThrow();
+        assertEquals(30, ranker.pairWeights().decisions());
+        Path file = dir.resolve("ferry.tether");
+        ModelFile.write(model, file);
+        TetherModel loaded = ModelFile.read(file);
+        assertEquals(ranker, loaded.coordinationRanker().orElseThrow());
+        assertEquals(model.id(), loaded.id());
+
+        TaggedWords s = TaggedWords.of("The/DT crew/NN inspected/VBD the/DT hull/NN and/CC replaced/VBD the/DT anodes/NNS ./.");
+        CoordinatorCandidates c = new ConjunctCandidateProposer().proposeAll(s.words, s.tags).get(0);
+        CoordinationChoice choice = loaded.coordinationRanker().get().choose(new CoordinationQuery(s.words, s.tags, c), 3);
+        ConjunctPair best = c.pair(choice.pair(0));
+        assertEquals(s.index("inspected"), best.left());
+        assertEquals(s.index("replaced"), best.right());
+        assertTrue(choice.probability(0) > 0 && choice.probability(0) <= 1);
+        assertTrue(choice.readings() <= 3 && choice.readings() >= 2);
+        for (int r = 1; r < choice.readings(); r++) assertTrue(choice.probability(r - 1) >= choice.probability(r), "readings best first");
+        assertEquals(choice.probability(0) - choice.probability(1), choice.margin(), 1e-12);
+        assertTrue(choice.margin() >= 0);
+    }
+
+    @Test
+    void trainingTwiceGivesTheSameModelBytes(@TempDir Path dir) throws Exception {
+        TetherModel a = new ModelTrainer().addCoordinationSentences(repeated()).build();
+        TetherModel b = new ModelTrainer().addCoordinationSentences(repeated()).build();
+        assertEquals(a.id(), b.id());
+    }
+
+    @Test
+    void aModelTrainedWithoutTreesHasNoCoordinationRanker() {
+        TetherModel model = new ModelTrainer().build();
+        assertFalse(model.coordinationRanker().isPresent());
+    }
+}
