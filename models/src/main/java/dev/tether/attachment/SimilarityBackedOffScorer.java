@@ -27,10 +27,14 @@ import java.util.List;
  * are mapped to count ids once, in the constructor.
  */
 public final class SimilarityBackedOffScorer implements QuadrupleScorer {
-    /** Neighbours consulted per word (measured on the quadruple devset; see README). */
-    public static final int NEIGHBOURS = 10;
-    /** Fewer pooled triple cases than this count as little evidence (measured on the quadruple devset; see README). */
-    public static final double MIN_TRIPLE_TRIALS = 2;
+    /** Neighbours consulted per word (chosen on a held-out fifth of the quadruple training split; see README). */
+    public static final int NEIGHBOURS = 50;
+    /** Fewer pooled triple cases than this count as little evidence (chosen on a held-out fifth of the quadruple training split; see README). */
+    public static final double MIN_TRIPLE_TRIALS = 5;
+    /** Power of the similarity that weights a neighbour's cases (chosen on a held-out fifth of the quadruple training split; see README). */
+    public static final double POWER = 1;
+    /** Weight of the pairs' cases beside the similar triples' (chosen on a held-out fifth of the quadruple training split; see README). */
+    public static final double PAIR_BLEND = 1;
 
     private static final SubTuple[] TRIPLES = {SubTuple.VERB_NOUN1, SubTuple.VERB_NOUN2, SubTuple.NOUN1_NOUN2};
 
@@ -40,13 +44,24 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private final BackedOffScorer plain;
     private final int neighbours;
     private final double minTripleTrials;
+    private final double power;
+    private final double pairBlend;
 
     public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer) {
-        this(counts, thesaurus, normalizer, NEIGHBOURS, MIN_TRIPLE_TRIALS);
+        this(counts, thesaurus, normalizer, NEIGHBOURS, MIN_TRIPLE_TRIALS, POWER, PAIR_BLEND);
     }
 
+    /**
+     * @param neighbours      neighbours consulted per word
+     * @param minTripleTrials pooled triple cases below which the triples count as little evidence
+     * @param power           a neighbour's cases are weighted by its similarity to this power (sharper for more)
+     * @param pairBlend       when the plain back-off fell to the pairs, how much their cases count beside the
+     *                        similar triples' (0: the similar triples alone decide)
+     */
     public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer,
-                                     int neighbours, double minTripleTrials) {
+                                     int neighbours, double minTripleTrials, double power, double pairBlend) {
+        this.power = power;
+        this.pairBlend = pairBlend;
         this.counts = counts;
         this.thesaurus = thesaurus;
         this.normalizer = normalizer;
@@ -108,6 +123,10 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         QuadrupleDecision d;
         if (quad[1] > 0) d = decision(quad, DecisionBasis.SIMILAR_QUADRUPLES);
         else if (triples[1] > 0 && triples[1] > (base.basis() == DecisionBasis.TRIPLES ? base.count() : 0)) {
+            if (base.basis() == DecisionBasis.PAIRS && pairBlend > 0) {
+                triples[0] += pairBlend * base.nounCount();
+                triples[1] += pairBlend * base.count();
+            }
             d = decision(triples, DecisionBasis.SIMILAR_TRIPLES);
         } else return base;
         if (contributions != null) {
@@ -145,8 +164,9 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         int k = Math.min(neighbours, thesaurus.neighbourCount(t));
         for (int i = 0; i < k; i++) {
             int nt = thesaurus.neighbourId(t, i);
-            double s = thesaurus.neighbourScore(t, i);
-            if (!(s > 0)) continue;
+            double score = thesaurus.neighbourScore(t, i);
+            if (!(score > 0)) continue;
+            double s = power == 1 ? score : Math.pow(score, power);
             int id = counts.words().id(thesaurus.key(nt));
             if (id <= 0) continue;
             int sv = slot == 0 ? id : v, sn1 = slot == 1 ? id : n1, sn2 = slot == 2 ? id : n2;
