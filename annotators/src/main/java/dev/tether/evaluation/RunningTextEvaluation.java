@@ -19,6 +19,7 @@ public final class RunningTextEvaluation {
     public static final String COUNT_SCORE = "count-score";
 
     final Accuracy attachment = new Accuracy();
+    final SentenceOutcomes attachmentOutcomes = new SentenceOutcomes();
     final CoordinationEvaluation coordination = new CoordinationEvaluation();
     final Accuracy candidateRecall = new Accuracy();
     final CalibrationError calibration = new CalibrationError();
@@ -39,6 +40,11 @@ public final class RunningTextEvaluation {
     }
 
     public Accuracy attachment() { return attachment; }
+    /**
+     * Every gold attachment's outcome by sentence, in file order (the same order for any model on the same file), for
+     * paired comparisons of two models.
+     */
+    public SentenceOutcomes attachmentOutcomes() { return attachmentOutcomes; }
     /** Coordination scope against the gold coordinations, with its baselines. */
     public CoordinationEvaluation coordination() { return coordination; }
     /** Gold head among the pipeline's candidates, over all gold attachments. */

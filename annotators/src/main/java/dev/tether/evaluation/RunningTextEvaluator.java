@@ -68,6 +68,7 @@ public final class RunningTextEvaluator {
                 List<AttachmentDecision> decisions = List.copyOf(JCasUtil.select(jcas, AttachmentDecision.class));
                 List<AttachmentAmbiguity> ambiguities = List.copyOf(JCasUtil.select(jcas, AttachmentAmbiguity.class));
                 result.decisions += decisions.size();
+                result.attachmentOutcomes.startSentence();
                 for (GoldAttachment g : gold.extract(s)) {
                     score(s, g, decisions, ambiguities, binary, result);
                 }
@@ -103,6 +104,7 @@ public final class RunningTextEvaluator {
         if (decision == null) result.missedPrepositions++;
         else result.calibration.add(Math.min(1, Math.max(0, decision.getProbability())), right);
         result.attachment.add(right);
+        result.attachmentOutcomes.add(right);
         result.byHeadClass.get(headClass).add(right);
         boolean covered = false;
         boolean nearestRight = false;
