@@ -98,7 +98,7 @@ enum CoordinationFeature {
     /** Sharing with a comma before the coordinator; parts: kind. */
     SHARED_COMMA(CoordinationFeatureFamily.PUNCTUATION, 1);
 
-    static final String[] COORDINATORS = {"", "and", "or", "but", "nor", "&", "yet", "plus", "so"};
+    static final String[] COORDINATORS = {"", "and", "or", "but", "nor", "&", "yet", "plus", "so", "/", "as", "rather"};
     private static final CoordinationFeature[] ALL = values();
 
     final CoordinationFeatureFamily family;
