@@ -192,8 +192,9 @@ public final class GenreAdaptation {
 
     private static void printTable(String title, List<Outcome> outcomes, boolean settingC) {
         System.out.println(title + " against A (trees of the other four genres), end to end on the genre's dev part");
-        System.out.printf("%-10s %6s %9s %9s %8s %19s %5s %5s %9s%n", "genre", "n", "acc A", "acc B", "gain", "95% interval",
-                "A>B", "B>A", "McNemar p");
+        String other = settingC ? "C" : "B";
+        System.out.printf("%-10s %6s %9s %9s %8s %19s %5s %5s %9s%n", "genre", "n", "acc A", "acc " + other, "gain",
+                "95% interval", "A>" + other, other + ">A", "McNemar p");
         double sum = 0;
         double[] meanGains = new double[RESAMPLES];
         for (Outcome o : outcomes) {
