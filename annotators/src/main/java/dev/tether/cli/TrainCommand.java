@@ -117,6 +117,7 @@ final class TrainCommand implements Command {
         }
         RawAttachmentCounts raw = null;
         String rawName = null;
+        int skippedDocuments = 0;
         if (a.has("raw") || a.has("raw-counts")) {
             RawAttachmentCountsBuilder merged = new RawAttachmentCountsBuilder();
             List<String> names = new ArrayList<>();
@@ -151,6 +152,7 @@ final class TrainCommand implements Command {
                     out.printf("raw text: skipped %,d documents (%s), %,d entries that are not documents%n",
                             summary.skippedCount(), why.length() == 0 ? "none" : why, summary.notDocuments());
                     for (List<String> reasons : summary.skipped().values()) for (String r : reasons) out.println("    skipped " + r);
+                    skippedDocuments += summary.skippedCount();
                 }
                 merged.addAll(summary.counts());
             }
@@ -267,7 +269,12 @@ final class TrainCommand implements Command {
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
-        return problems > 0 ? Tether.SOME_FAILED : Tether.OK;
+        if (raw != null) DomainReportText.print(model, out);
+        if (skippedDocuments > 0) {
+            out.printf("%,d raw documents were skipped (listed above); the model holds the others (exit code %d)%n",
+                    skippedDocuments, Tether.SOME_FAILED);
+        }
+        return problems > 0 || skippedDocuments > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
     /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */
