@@ -58,7 +58,10 @@ final class TrainCommand implements Command {
     @Override
     public String help() {
         return "usage: tether " + usage() + "\n\n"
-                + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n\n"
+                + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n"
+                + "With raw text it ends with a domain report (stored in the model; 'tether inspect' shows it again):\n"
+                + "events per raw source, vocabulary overlap with the --base model, prepositions whose majority\n"
+                + "attachment changed. Raw documents that are empty, binary or not UTF-8 are skipped and listed (exit 1).\n\n"
                 + "  --quadruples FILE...  labelled quadruples: 'id verb noun1 preposition noun2 V|N' per line, or\n"
                 + "                        Tether's tab-separated format with a header\n"
                 + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz): head-choice examples that train the\n"
