@@ -41,12 +41,14 @@ public final class ConjunctCandidateProposer {
     private static final String[] PRECONJUNCTIONS = {"both", "either", "neither", "whether"};
     private static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re"};
     private static final String[] AUXILIARIES = {"have", "has", "had", "'ve", "'d", "do", "does", "did", "having"};
+    private static final String[] CLAUSE_OPENERS = {"if", "when", "since", "once", "because", "while", "although", "though",
+            "unless", "whenever", "after", "before", "until"};
     private static final String[] SUBORDINATORS = {"because", "if", "that", "while", "as", "since", "though", "although",
             "unless", "whether", "than", "so", "once", "until", "after", "before"};
 
     static final byte OTHER = 0, NOUN = 1, PRONOUN = 2, NUMBER = 3, VERB = 4, PARTICIPLE = 5, ADJECTIVE = 6, ADVERB = 7,
             DETERMINER = 8, PREPOSITION = 9, MODAL = 10, TO = 11, COORDINATOR = 12, COMMA = 13, BARRIER = 14, INNER = 15,
-            EXISTENTIAL = 16, WH = 17, PROPER = 18, SYMBOL = 19;
+            EXISTENTIAL = 16, WH = 17, PROPER = 18, SYMBOL = 19, CLOSE = 20, OPEN = 21;
 
     /** Every coordinator of the sentence with its candidates, in text order. */
     public List<CoordinatorCandidates> proposeAll(String[] words, String[] pennTags) {
@@ -65,9 +67,26 @@ public final class ConjunctCandidateProposer {
         return out;
     }
 
-    /** Whether token {@code c} is a coordinating conjunction (not the first half of "both ... and"). */
+    /**
+     * Whether token {@code c} is a coordinating conjunction: a word tagged as one (not the first half of "both ...
+     * and"), a slash between two words ("read / relax", "owner / baker"; not inside "and/or"), or the first word of
+     * "as well as" or "rather than".
+     */
     static boolean isCoordinator(String[] words, byte[] kinds, int c) {
-        return kinds[c] == COORDINATOR && !isOneOf(words[c], PRECONJUNCTIONS);
+        if (kinds[c] == COORDINATOR) return !isOneOf(words[c], PRECONJUNCTIONS);
+        int n = words.length;
+        if (words[c].equals("/")) {
+            return c > 0 && c + 1 < n && classOf(words, kinds, c - 1) != null && classOf(words, kinds, c + 1) != null;
+        }
+        return connectiveLength(words, c) > 0;
+    }
+
+    /** Tokens of a multiword coordinator starting at {@code c} ("as well as": 3, "rather than": 2), 0 for none. */
+    static int connectiveLength(String[] words, int c) {
+        int n = words.length;
+        if (c + 2 < n && words[c].equalsIgnoreCase("as") && words[c + 1].equalsIgnoreCase("well") && words[c + 2].equalsIgnoreCase("as")) return 3;
+        if (c + 1 < n && words[c].equalsIgnoreCase("rather") && words[c + 1].equalsIgnoreCase("than")) return 2;
+        return 0;
     }
 
     private CoordinatorCandidates propose(String[] words, byte[] kinds, int c) {
@@ -84,7 +103,14 @@ public final class ConjunctCandidateProposer {
             int[] perClass = new int[HeadClass.values().length];
             for (int k = c - 1; k >= lowest; k--) {
                 // Clause punctuation ends the scan, except right before the coordinator ("; but", "( or").
-                if (kinds[k] == BARRIER && k < c - 1) break;
+                if (kinds[k] == CLOSE) {
+                    // A bracketed aside ("Joan (3-5213), Bert (3-5076) or Kathy"): the scan goes on before its opening.
+                    int open = openingBracket(kinds, k, lowest);
+                    if (open < 0) break;
+                    k = open;
+                    continue;
+                }
+                if (isBarrier(kinds[k]) && k < c - 1) break;
                 HeadClass cls = classOf(words, kinds, k);
                 if (cls == null) continue;
                 int limit = cls == rightClasses[r] ? MAX_SAME_CLASS : MAX_OTHER_CLASS;
@@ -101,15 +127,28 @@ public final class ConjunctCandidateProposer {
         return new CoordinatorCandidates(c, pairs, capped);
     }
 
+    private static boolean isBarrier(byte kind) {
+        return kind == BARRIER || kind == CLOSE || kind == OPEN;
+    }
+
+    /** The opening bracket that matches the closing one at {@code close}, not before {@code lowest}; -1 when none. */
+    private static int openingBracket(byte[] kinds, int close, int lowest) {
+        for (int k = close - 1; k >= lowest; k--) {
+            if (kinds[k] == OPEN) return k;
+            if (kinds[k] == BARRIER || kinds[k] == CLOSE) return -1;
+        }
+        return -1;
+    }
+
     private static boolean barrierBetween(byte[] kinds, int from, int to) {
-        for (int k = from; k < to; k++) if (kinds[k] == BARRIER) return true;
+        for (int k = from; k < to; k++) if (isBarrier(kinds[k])) return true;
         return false;
     }
 
     /** Content words before {@code from} within {@link #BACK_WINDOW} more tokens (what the window leaves out, bounded). */
     private static int contentBefore(String[] words, byte[] kinds, int from) {
         int count = 0;
-        for (int k = from - 1; k >= Math.max(0, from - BACK_WINDOW) && kinds[k] != BARRIER; k--) {
+        for (int k = from - 1; k >= Math.max(0, from - BACK_WINDOW) && !isBarrier(kinds[k]); k--) {
             if (classOf(words, kinds, k) != null) count++;
         }
         return count;
@@ -118,10 +157,10 @@ public final class ConjunctCandidateProposer {
     /** The readings of the last conjunct's head after coordinator {@code c}; returns how many. */
     private static int rightHeads(String[] words, byte[] kinds, int c, int[] heads, HeadClass[] classes) {
         int n = words.length;
-        int s = c + 1;
+        int s = c + Math.max(1, connectiveLength(words, c));
         // "and, ...", "and/or": the conjunct starts after them.
         while (s < n && s <= c + 3 && (kinds[s] == COMMA || kinds[s] == COORDINATOR || kinds[s] == SYMBOL)) s++;
-        if (s >= n || kinds[s] == BARRIER && s == n - 1) return 0;
+        if (s >= n || isBarrier(kinds[s]) && s == n - 1) return 0;
         int end = Math.min(n, c + FORWARD_WINDOW);
         int count = 0;
         int v = s;
@@ -144,11 +183,38 @@ public final class ConjunctCandidateProposer {
             int first = g;
             while (first < noun && !(kinds[first] == NOUN || kinds[first] == PROPER || kinds[first] == NUMBER)) first++;
             if (first < noun && !(kinds[first] == PROPER && kinds[noun] == PROPER)) count = add(heads, classes, count, first, HeadClass.NOUN);
+            // "Urban Development", "Rodale Books": a name may also be headed by its last word (a compound in UD).
+            int last = noun;
+            while (kinds[noun] == PROPER && last + 1 < n && last + 1 < g + GROUP && kinds[last + 1] == PROPER) last++;
+            if (last > noun) count = add(heads, classes, count, last, HeadClass.NOUN);
+        }
+        // "but if you want to reach me, write": after a subordinate clause, the main clause's verb.
+        if (isOneOf(words[s], CLAUSE_OPENERS)) {
+            for (int k = s + 1; k < n && k <= s + CLAUSE; k++) {
+                if (isBarrier(kinds[k]) || kinds[k] == COORDINATOR) break;
+                if (kinds[k] != COMMA) continue;
+                int m = k + 1;
+                while (m < n && kinds[m] == ADVERB) m++;
+                if (m < n && (isVerb(kinds[m]) || kinds[m] == MODAL)) {
+                    int[] head = mainVerb(words, kinds, m);
+                    if (head[0] >= 0) count = add(heads, classes, count, head[0], HeadClass.values()[head[1]]);
+                } else {
+                    for (int j = m; j < n && j < m + GROUP; j++) {
+                        if (kinds[j] == VERB || kinds[j] == MODAL) {
+                            int[] head = mainVerb(words, kinds, j);
+                            if (head[0] >= 0) count = add(heads, classes, count, head[0], HeadClass.values()[head[1]]);
+                            break;
+                        }
+                        if (isBarrier(kinds[j]) || kinds[j] == COMMA) break;
+                    }
+                }
+                break;
+            }
         }
         // A clause after the coordinator ("... and the engineer replaced the seals", "but if one raises doubts"):
         // the first verb group within the window.
         for (int k = Math.max(s, noun + 1); k < end; k++) {
-            if (kinds[k] == BARRIER || kinds[k] == COORDINATOR) break;
+            if (isBarrier(kinds[k]) || kinds[k] == COORDINATOR) break;
             if (kinds[k] == VERB || kinds[k] == MODAL) {
                 int[] head = mainVerb(words, kinds, k);
                 if (head[0] >= 0) count = add(heads, classes, count, head[0], HeadClass.values()[head[1]]);
@@ -302,7 +368,7 @@ public final class ConjunctCandidateProposer {
                 if (object >= 0) modifiers.add(new ScopeCandidate(object, ModifierKind.OBJECT, p, object, -1));
             }
             int k = right + 1;
-            while (k < n && k <= right + CLAUSE && kinds[k] != BARRIER && kinds[k] != COMMA && kinds[k] != COORDINATOR) k++;
+            while (k < n && k <= right + CLAUSE && !isBarrier(kinds[k]) && kinds[k] != COMMA && kinds[k] != COORDINATOR) k++;
             rightEnd = k - 1;
         }
         return new ConjunctPair(left, leftClass, right, rightClass, middle, leftBegin, leftEnd, rightBegin, rightEnd,
@@ -401,7 +467,9 @@ public final class ConjunctCandidateProposer {
             case ",": return COMMA;
             case "EX": return EXISTENTIAL;
             case "WP": case "WDT": return WH;
-            case ".": case ":": case "-LRB-": case "-RRB-": return BARRIER;
+            case ".": case ":": return BARRIER;
+            case "-LRB-": return OPEN;
+            case "-RRB-": return CLOSE;
             case "SYM": return SYMBOL;
             case "PRP$": case "POS": case "HYPH": case "WP$": case "``": case "''": return INNER;
             default: return OTHER;

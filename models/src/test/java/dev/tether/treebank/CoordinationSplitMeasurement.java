@@ -52,7 +52,11 @@ public final class CoordinationSplitMeasurement {
                     System.out.println(b);
                 }
                 int i = c.indexOf(g.left(), g.right());
-                if (i < 0) continue;
+                if (i < 0) {
+                    if (right && System.getenv("SHOW") != null) System.out.println("NOLEFT gold=" + s.form(g.left()) + "/" + s.xpos(g.left())
+                            + " right=" + s.form(g.right()) + " :: " + window(s, g.left() - 2, g.coordinator() + 3));
+                    continue;
+                }
                 pairFound++;
                 ConjunctPair p = c.pair(i);
                 if (p.rightBegin() == g.rightBegin() && p.rightEnd() == g.rightEnd()) rightSpan++;
