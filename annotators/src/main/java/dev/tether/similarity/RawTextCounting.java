@@ -155,10 +155,10 @@ public final class RawTextCounting {
         try {
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
-            return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + ")");
+            return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + "); check its permissions");
         }
         for (byte b : bytes) {
-            if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file");
+            if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file; give plain UTF-8 text, or move it out of the input");
         }
         String text;
         try {
@@ -167,7 +167,7 @@ public final class RawTextCounting {
             return new Reading(null, Skip.ENCODING, e.getMessage());
         }
         if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
-        if (text.isBlank()) return new Reading(null, Skip.EMPTY, file + ": empty");
+        if (text.isBlank()) return new Reading(null, Skip.EMPTY, file + ": empty (no text to count); add its text or move it out of the input");
         return new Reading(text, null, null);
     }
 
