@@ -27,7 +27,9 @@ final class InspectCommand implements Command {
     public String help() {
         return "usage: tether " + usage() + "\n\n"
                 + "Shows what a model file holds: its id, format and normalization versions, the training sources with\n"
-                + "their checksums, the vocabulary, the distinct keys of every back-off level, and the approximate heap.\n\n"
+                + "their checksums, the vocabulary, the distinct keys of every back-off level, the approximate heap, and for a\n"
+                + "model trained with raw text its domain report (events per raw source, vocabulary overlap with the base\n"
+                + "model, prepositions whose majority attachment changed).\n\n"
                 + "  MODEL     a model file written by 'tether train'\n"
                 + "  default   the shipped default model\n";
     }
@@ -78,6 +80,7 @@ final class InspectCommand implements Command {
         out.printf("approximate heap of the count tables: %.1f MB%n", (q.approximateBytes() + h.approximateBytes()) / 1e6);
         out.println(m.tagger().map(t -> String.format("tagger         %s (%,d bytes)", t.description(), t.size()))
                 .orElse("tagger         none (the built-in preprocessing uses the shipped OpenNLP tagger)"));
+        DomainReportText.print(m, out);
         return Tether.OK;
     }
 }

@@ -18,6 +18,9 @@ import dev.tether.similarity.ThesaurusBuilder;
 import dev.tether.similarity.ThesaurusFile;
 import dev.tether.similarity.ThesaurusSettings;
 import dev.tether.similarity.Weighting;
+import dev.tether.spark.SparkJob;
+import dev.tether.spark.SparkLibraries;
+import dev.tether.spark.SparkMaster;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.IOException;
@@ -38,7 +41,7 @@ import java.util.Set;
 final class ThesaurusCommand implements Command {
     private static final String BUILD = "thesaurus build --raw PATH... --out FILE [--contexts window|grammatical|all] "
             + "[--weighting relative|ppmi|ppmi-smoothed|ttest] [--measure cosine|lin|jaccard] [--min-frequency N] "
-            + "[--max-context-words N] [--neighbours K] [--threads N]";
+            + "[--max-context-words N] [--neighbours K] [--threads N | --spark MASTER]";
     private static final String QUERY = "thesaurus query --thesaurus FILE [--top N] WORD...";
     private static final String EVALUATE = "thesaurus evaluate --thesaurus FILE --pairs CSV [--json]";
 
@@ -90,6 +93,8 @@ final class ThesaurusCommand implements Command {
               --max-context-words N    contexts shared by more words are pruned; default %d
               --neighbours K           neighbours stored per word; default %d
               --threads N              tagging and neighbour-search threads; default: all cores
+              --spark MASTER           read, tag and count on Spark (local[N], spark://HOST:PORT, yarn); the
+                                       thesaurus is the same, byte for byte
             """.formatted(ThesaurusSettings.DEFAULT.contexts().label(), ThesaurusSettings.DEFAULT.weighting().label(),
             ThesaurusSettings.DEFAULT.measure().label(), ThesaurusSettings.DEFAULT.minFrequency(),
             ThesaurusSettings.DEFAULT.maxContextWords(), ThesaurusSettings.DEFAULT.neighbours());
@@ -122,7 +127,7 @@ final class ThesaurusCommand implements Command {
 
     private int build(String[] args, PrintStream out) throws UsageException, IOException {
         CommandArguments a = new CommandArguments("thesaurus build", args, 2, Set.of("raw", "out", "contexts", "weighting",
-                "measure", "min-frequency", "max-context-words", "neighbours", "threads"), Set.of());
+                "measure", "min-frequency", "max-context-words", "neighbours", "threads", "spark"), Set.of());
         noPositional(a, BUILD);
         if (!a.has("raw")) throw new UsageException("--raw is required: give the text files or folders to learn from");
         Path target = Path.of(a.required("out"));
@@ -139,6 +144,11 @@ final class ThesaurusCommand implements Command {
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
+        SparkMaster spark = SparkOption.master(a.value("spark", null));
+        if (spark != null && a.has("threads")) {
+            throw new UsageException("--threads and --spark exclude each other: on Spark the master sets how many"
+                    + " taggers run side by side (local[N], or the cluster's executor cores)");
+        }
         int threads = integer(a, "threads", Runtime.getRuntime().availableProcessors());
         if (threads < 1) throw new UsageException("--threads must be at least 1");
         List<Path> inputs = new ArrayList<>();
@@ -146,15 +156,30 @@ final class ThesaurusCommand implements Command {
 
         long start = System.nanoTime();
         ContextCounter counter = new ContextCounter();
-        RawTextCounting.Summary counted = new RawTextCounting(threads).count(inputs, counter);
+        RawTextCounting.Summary counted;
+        String where;
+        if (spark == null) {
+            counted = new RawTextCounting(threads).count(inputs, counter);
+            where = threads + " threads";
+        } else {
+            for (Path p : inputs) {
+                if (!java.nio.file.Files.exists(p)) throw new IOException(p + " does not exist; give raw text files or folders of .txt files");
+            }
+            SparkLibraries.require();
+            try (SparkJob job = SparkJob.start(spark, "tether thesaurus build")) {
+                job.checkExecutors(inputs, null, null, null);
+                counted = job.countContexts(inputs, counter);
+                where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
+            }
+        }
         long built = System.nanoTime();
         Thesaurus thesaurus = ThesaurusBuilder.build(counter, settings, threads);
         double buildSeconds = (System.nanoTime() - built) / 1e9;
         ThesaurusFile.write(thesaurus, target);
         double seconds = (System.nanoTime() - start) / 1e9;
 
-        out.printf("read     %,d documents, %,d sentences, %,d tokens (%.1f s, %d threads)%n", counted.documents(),
-                counted.sentences(), counted.tokens(), counted.seconds(), threads);
+        out.printf("read     %,d documents, %,d sentences, %,d tokens (%.1f s, %s)%n", counted.documents(),
+                counted.sentences(), counted.tokens(), counted.seconds(), where);
         out.printf("skipped  %,d documents%s%n", counted.skippedCount(), counted.skippedCount() == 0 ? "" : ":");
         for (Map.Entry<RawTextCounting.Skip, List<String>> e : counted.skipped().entrySet()) {
             out.printf("  %-16s %,d%n", e.getKey().label(), e.getValue().size());

@@ -58,7 +58,10 @@ final class TrainCommand implements Command {
     @Override
     public String help() {
         return "usage: tether " + usage() + "\n\n"
-                + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n\n"
+                + "Counts training sources into one model file (deterministic: the same inputs give the same bytes).\n"
+                + "With raw text it ends with a domain report (stored in the model; 'tether inspect' shows it again):\n"
+                + "events per raw source, vocabulary overlap with the --base model, prepositions whose majority\n"
+                + "attachment changed. Raw documents that are empty, binary or not UTF-8 are skipped and listed (exit 1).\n\n"
                 + "  --quadruples FILE...  labelled quadruples: 'id verb noun1 preposition noun2 V|N' per line, or\n"
                 + "                        Tether's tab-separated format with a header\n"
                 + "  --conllu FILE...      treebanks in CoNLL-U (plain or .gz): head-choice examples that train the\n"
@@ -117,6 +120,7 @@ final class TrainCommand implements Command {
         }
         RawAttachmentCounts raw = null;
         String rawName = null;
+        int skippedDocuments = 0;
         if (a.has("raw") || a.has("raw-counts")) {
             RawAttachmentCountsBuilder merged = new RawAttachmentCountsBuilder();
             List<String> names = new ArrayList<>();
@@ -151,6 +155,7 @@ final class TrainCommand implements Command {
                     out.printf("raw text: skipped %,d documents (%s), %,d entries that are not documents%n",
                             summary.skippedCount(), why.length() == 0 ? "none" : why, summary.notDocuments());
                     for (List<String> reasons : summary.skipped().values()) for (String r : reasons) out.println("    skipped " + r);
+                    skippedDocuments += summary.skippedCount();
                 }
                 merged.addAll(summary.counts());
             }
@@ -267,7 +272,12 @@ final class TrainCommand implements Command {
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");
-        return problems > 0 ? Tether.SOME_FAILED : Tether.OK;
+        if (raw != null) DomainReportText.print(model, out);
+        if (skippedDocuments > 0) {
+            out.printf("%,d raw documents were skipped (listed above); the model holds the others (exit code %d)%n",
+                    skippedDocuments, Tether.SOME_FAILED);
+        }
+        return problems > 0 || skippedDocuments > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
     /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */

@@ -31,7 +31,9 @@ import java.nio.file.Path;
  * and written with sorted ids, so merging the files of any split of the documents, in any order, gives the same
  * model bytes. {@link #count(JCas)} gives one CAS's counts, for callers that merge per document.
  *
- * <p>Sentences and tokens are tallied from Tether's own types; in a host flow with its own types they read 0.
+ * <p>Sentences and tokens are tallied from Tether's own types, and so are the occurrences of nouns and verbs (by
+ * their Penn tags) that the domain report compares with a base model's vocabulary; in a host flow with its own
+ * types they read 0.
  */
 @ResourceMetaData(name = "Tether unlabelled attachment counter",
         description = "Counts unambiguous attachments and head-preposition-object co-occurrence of unlabelled text into a raw counts file.")
@@ -67,7 +69,12 @@ public class UnlabelledAttachmentCounter extends JCasAnnotator_ImplBase {
     /** Counts one CAS (its ambiguities, sentences and tokens) into {@code builder}. */
     public static void countInto(JCas jcas, RawAttachmentCountsBuilder builder) {
         for (AttachmentAmbiguity a : jcas.select(AttachmentAmbiguity.class)) builder.add(AttachmentResolver.query(a));
-        builder.addDocument(jcas.select(Sentence.class).count(), jcas.select(Token.class).count());
+        long tokens = 0;
+        for (Token t : jcas.select(Token.class)) {
+            builder.addToken(t.getCoveredText(), t.getPos());
+            tokens++;
+        }
+        builder.addDocument(jcas.select(Sentence.class).count(), tokens);
     }
 
     /** The counts of one CAS alone. */

@@ -113,15 +113,13 @@ public final class RawTextCounting {
                     inFlight.add(pool.submit(() -> Document.of(file, tagger.get())));
                 }
                 Document d = take(inFlight.poll());
-                if (d.skip != null) {
-                    skipped.computeIfAbsent(d.skip, k -> new ArrayList<>()).add(d.reason);
+                if (d.skip() != null) {
+                    skipped.computeIfAbsent(d.skip(), k -> new ArrayList<>()).add(d.reason());
                     continue;
                 }
-                for (int i = 0; i < d.text.words().size(); i++) {
-                    sink.addSentence(d.text.words().get(i), d.text.tags().get(i));
-                    sentences++;
-                    tokens += d.text.words().get(i).length;
-                }
+                d.sentencesTo(sink);
+                sentences += d.text().words().size();
+                tokens += d.text().tokens();
                 counted++;
             }
         } finally {
@@ -157,10 +155,10 @@ public final class RawTextCounting {
         try {
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
-            return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + ")");
+            return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + "); check its permissions");
         }
         for (byte b : bytes) {
-            if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file");
+            if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file; give plain UTF-8 text, or move it out of the input");
         }
         String text;
         try {
@@ -169,25 +167,14 @@ public final class RawTextCounting {
             return new Reading(null, Skip.ENCODING, e.getMessage());
         }
         if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
-        if (text.isBlank()) return new Reading(null, Skip.EMPTY, file + ": empty");
+        if (text.isBlank()) return new Reading(null, Skip.EMPTY, file + ": empty (no text to count); add its text or move it out of the input");
         return new Reading(text, null, null);
     }
 
     /** One document: tagged, or skipped with a reason that names the file. */
-    private static final class Document {
-        final Path file;
-        final RawTextTagger.TaggedText text;
-        final Skip skip;
-        final String reason;
-
-        private Document(Path file, RawTextTagger.TaggedText text, Skip skip, String reason) {
-            this.file = file;
-            this.text = text;
-            this.skip = skip;
-            this.reason = reason;
-        }
-
-        static Document of(Path file, RawTextTagger tagger) {
+    public record Document(Path file, RawTextTagger.TaggedText text, Skip skip, String reason) {
+        /** Reads and tags {@code file} with {@code tagger}, or says why it is skipped. */
+        public static Document of(Path file, RawTextTagger tagger) {
             Reading r = read(file);
             if (r.skip() != null) return new Document(file, null, r.skip(), r.reason());
             String text = r.text();
@@ -196,6 +183,11 @@ public final class RawTextCounting {
             } catch (AnalysisEngineProcessException | RuntimeException e) {
                 return new Document(file, null, Skip.UNREADABLE, file + ": preprocessing failed (" + e.getMessage() + ")");
             }
+        }
+
+        /** Hands the document's sentences to {@code sink}, in order. */
+        public void sentencesTo(SentenceSink sink) {
+            for (int i = 0; i < text.words().size(); i++) sink.addSentence(text.words().get(i), text.tags().get(i));
         }
     }
 }

@@ -18,11 +18,11 @@ import java.util.List;
  * Sentences of raw text with Penn Treebank tags, from the built-in preprocessing ({@link TextPreprocessor} with
  * its chunker off, since contexts need tags only). One tagger per thread: it owns its engine and CAS.
  */
-final class RawTextTagger implements AutoCloseable {
+public final class RawTextTagger implements AutoCloseable {
     private final AnalysisEngine engine;
     private final JCas jcas;
 
-    RawTextTagger() throws ResourceInitializationException {
+    public RawTextTagger() throws ResourceInitializationException {
         engine = AnalysisEngineFactory.createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false);
         try {
             jcas = CasCreationUtils.createCas(engine.getAnalysisEngineMetaData()).getJCas();
@@ -32,7 +32,7 @@ final class RawTextTagger implements AutoCloseable {
     }
 
     /** The tagged sentences of {@code text}: for each, its words and their tags. */
-    TaggedText tag(String text) throws AnalysisEngineProcessException {
+    public TaggedText tag(String text) throws AnalysisEngineProcessException {
         jcas.reset();
         jcas.setDocumentLanguage("en");
         jcas.setDocumentText(text);
@@ -59,8 +59,8 @@ final class RawTextTagger implements AutoCloseable {
     }
 
     /** The sentences of one document: {@code words.get(i)} and {@code tags.get(i)} are the i-th sentence. */
-    record TaggedText(List<String[]> words, List<String[]> tags) {
-        long tokens() {
+    public record TaggedText(List<String[]> words, List<String[]> tags) {
+        public long tokens() {
             long n = 0;
             for (String[] w : words) n += w.length;
             return n;

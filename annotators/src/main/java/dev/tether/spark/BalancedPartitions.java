@@ -49,4 +49,32 @@ final class BalancedPartitions {
         }
         return result;
     }
+
+    /**
+     * {@code items} cut into at most {@code partitions} consecutive, non-empty runs of about equal weight, in order: the
+     * first run holds the first items. For counts whose ids follow the order of the text (a thesaurus's context
+     * counts), which must be merged in that order.
+     */
+    static <T extends Serializable> List<ArrayList<T>> inOrder(List<T> items, int partitions, ToLongFunction<T> size) {
+        int n = Math.max(1, Math.min(partitions, items.size()));
+        long total = 0;
+        long[] sizes = new long[items.size()];
+        for (int i = 0; i < items.size(); i++) total += sizes[i] = Math.max(1, size.applyAsLong(items.get(i)));
+        List<ArrayList<T>> result = new ArrayList<>();
+        ArrayList<T> part = new ArrayList<>();
+        long done = 0;
+        for (int i = 0; i < items.size(); i++) {
+            part.add(items.get(i));
+            done += sizes[i];
+            int left = items.size() - i - 1;
+            // Close this run once it reaches its share of the weight, keeping one item for each run still to come.
+            boolean share = done * n >= total * (result.size() + 1);
+            if (left > 0 && result.size() < n - 1 && (share || left == n - 1 - result.size())) {
+                result.add(part);
+                part = new ArrayList<>();
+            }
+        }
+        if (!part.isEmpty()) result.add(part);
+        return result;
+    }
 }

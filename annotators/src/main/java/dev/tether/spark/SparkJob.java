@@ -5,6 +5,7 @@ import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.pipeline.CollectionRun;
 import dev.tether.pipeline.DocumentFiles;
 import dev.tether.pipeline.DocumentTask;
+import dev.tether.similarity.ContextCounter;
 import dev.tether.similarity.RawTextCounting;
 import dev.tether.pipeline.DocumentOutcome;
 import org.apache.spark.SparkConf;
@@ -181,6 +182,45 @@ public final class SparkJob implements AutoCloseable {
         }
         for (List<String> reasons : skipped.values()) Collections.sort(reasons);
         return new RawTextAttachmentCounting.Summary(counts.build(), skipped, notDocuments, (System.nanoTime() - start) / 1e9);
+    }
+
+    /**
+     * Counts the thesaurus contexts of the raw text below {@code inputs} into {@code into} (an empty counter) as
+     * {@link RawTextCounting#count} does on threads, with the same counts and ids: the documents, in the order that
+     * run reads them, are cut into consecutive partitions; each task tags and counts its partition into a counter of
+     * its own; the driver appends the completed tasks' counters in partition order.
+     */
+    public RawTextCounting.Summary countContexts(List<Path> inputs, ContextCounter into) throws IOException {
+        long start = System.nanoTime();
+        List<String> files = new ArrayList<>();
+        long notDocuments = 0;
+        for (Path p : inputs) {
+            DocumentFiles.Listing listing = DocumentFiles.list(p);
+            for (Path d : listing.documents()) files.add(d.toString());
+            notDocuments += listing.skippedTotal();
+        }
+        List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
+        List<ContextShard> shards;
+        try {
+            shards = new ArrayList<>(context.parallelize(parts, Math.max(1, parts.size()))
+                    .mapPartitionsWithIndex(new PartitionContextCounting(), false).collect());
+        } catch (RuntimeException e) {
+            throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
+        } finally {
+            if (master.local()) PartitionContextCounting.closeAll();
+        }
+        shards.sort(java.util.Comparator.comparingInt(ContextShard::partition));
+        Map<RawTextCounting.Skip, List<String>> skipped = new java.util.LinkedHashMap<>();
+        int documents = 0;
+        for (ContextShard shard : shards) {
+            into.append(ContextCounter.fromBytes(shard.counts(), "the context counts of Spark partition " + shard.partition()));
+            documents += shard.documents();
+            for (String[] s : shard.skipped()) {
+                skipped.computeIfAbsent(RawTextCounting.Skip.valueOf(s[0]), k -> new ArrayList<>()).add(s[1]);
+            }
+        }
+        return new RawTextCounting.Summary(documents, skipped, notDocuments, into.sentenceCount(), into.tokenCount(),
+                (System.nanoTime() - start) / 1e9);
     }
 
     /** Stops the context this job started (not a lent one). */

@@ -27,7 +27,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * threads writes: XMI, ledgers, manifest and the run summary (all but its timing); a document that fails fails alone
  * and is listed the same way; and what cannot work stops the run before any output (a missing input, a master that
  * cannot be reached, a master that is no master, --threads beside --spark). {@code tether train --raw ... --spark
- * local[2]} writes the model file byte for byte as the count on threads does, alone and mixed with labelled sources.
+ * local[2]} writes the model file byte for byte as the count on threads does, alone and mixed with labelled sources,
+ * and {@code tether thesaurus build --spark local[2]} the thesaurus file of the build on threads.
  * One embedded Spark context serves the whole class. Documents are invented maintenance logs of the fictional ferry
  * operator.
  */
@@ -128,7 +129,7 @@ class CommandsOnSparkTest {
             for (int k = 0; k < 5; k++) text.append(LOGS.get((d * 5 + k) % LOGS.size()).strip()).append(' ');
             Files.writeString(raw.resolve(String.format("shift-%02d.txt", d)), text.append('\n').toString());
         }
-        Files.write(raw.resolve("shift-99.txt"), new byte[] {'o', 'k', 0, 1}); // skipped as binary, either way
+        Files.write(raw.resolve("shift-99.txt"), new byte[] {'o', 'k', 0, 1}); // skipped as binary (exit code 1), either way
         return raw;
     }
 
@@ -139,8 +140,8 @@ class CommandsOnSparkTest {
         Path onSpark = dir.resolve("spark.tether");
         CommandLineRun a = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onThreads.toString(), "--threads", "2");
         CommandLineRun b = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onSpark.toString(), "--spark", "local[2]");
-        assertEquals(Tether.OK, a.exitCode(), a::toString);
-        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertEquals(Tether.SOME_FAILED, a.exitCode(), a::toString);
+        assertEquals(Tether.SOME_FAILED, b.exitCode(), b::toString);
         assertTrue(b.out().contains("raw text: 24 documents") && b.out().contains("skipped 1 documents (1 binary)"), b::toString);
         assertTrue(Files.size(onSpark) > 0);
         assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark));
@@ -162,9 +163,30 @@ class CommandsOnSparkTest {
         b.addAll(List.of(dir.resolve("spark.tether").toString(), "--spark", "local[2]"));
         CommandLineRun ra = CommandLineRun.of(a.toArray(new String[0]));
         CommandLineRun rb = CommandLineRun.of(b.toArray(new String[0]));
-        assertEquals(Tether.OK, ra.exitCode(), ra::toString);
-        assertEquals(Tether.OK, rb.exitCode(), rb::toString);
+        assertEquals(Tether.SOME_FAILED, ra.exitCode(), ra::toString);
+        assertEquals(Tether.SOME_FAILED, rb.exitCode(), rb::toString);
         assertArrayEquals(Files.readAllBytes(dir.resolve("threads.tether")), Files.readAllBytes(dir.resolve("spark.tether")));
+    }
+
+    @Test
+    void thesaurusBuiltOnSparkHasTheBytesOfTheBuildOnThreads() throws Exception {
+        Path raw = writeRawText();
+        Path onThreads = dir.resolve("threads.thesaurus");
+        Path onSpark = dir.resolve("spark.thesaurus");
+        CommandLineRun a = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out", onThreads.toString(),
+                "--min-frequency", "2", "--threads", "2");
+        CommandLineRun b = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out", onSpark.toString(),
+                "--min-frequency", "2", "--spark", "local[2]");
+        // The binary file is skipped and counted either way (exit code 1: some input skipped).
+        assertEquals(Tether.SOME_FAILED, a.exitCode(), a::toString);
+        assertEquals(Tether.SOME_FAILED, b.exitCode(), b::toString);
+        assertTrue(b.out().contains("read     24 documents") && b.out().contains(", 2 task slots)"), b::toString);
+        assertTrue(b.out().contains("binary") && b.out().contains("shift-99.txt"), b::toString);
+        assertTrue(Files.size(onSpark) > 0);
+        assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark));
+        CommandLineRun both = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out",
+                dir.resolve("x.thesaurus").toString(), "--threads", "2", "--spark", "local[2]");
+        assertEquals(Tether.USAGE, both.exitCode(), both::toString);
     }
 
     @Test

@@ -96,10 +96,17 @@ enum CoordinationFeature {
     /** Sharing, by distance bucket between the heads; parts: kind, bucket. */
     SHARED_DISTANCE(CoordinationFeatureFamily.DISTANCE, 1),
     /** Sharing with a comma before the coordinator; parts: kind. */
-    SHARED_COMMA(CoordinationFeatureFamily.PUNCTUATION, 1);
+    SHARED_COMMA(CoordinationFeatureFamily.PUNCTUATION, 1),
+    /** Where each head stands in a name (0 not a name, 1 first word, 2 last word, 3 one-word name); parts: left, right. */
+    NAME_POSITIONS(CoordinationFeatureFamily.PARALLELISM, 1),
+    /** The first head begins a comma list that ends at the coordinator; parts: class pair. */
+    LIST_FIRST(CoordinationFeatureFamily.PUNCTUATION, 1),
+    /** A verbal first head inside a subordinate or relative clause; parts: whether the last conjunct has its own subject. */
+    LEFT_SUBORDINATE(CoordinationFeatureFamily.STRUCTURE, 1);
 
     static final String[] COORDINATORS = {"", "and", "or", "but", "nor", "&", "yet", "plus", "so", "/", "as", "rather"};
     private static final CoordinationFeature[] ALL = values();
+    private static final String[] NAME_PLACES = {"not a name", "first word", "last word", "one word"};
 
     final CoordinationFeatureFamily family;
     final int minimumDecisions;
@@ -166,6 +173,9 @@ enum CoordinationFeature {
             case SHARED_SIMILARITY: return "distributional similarity of the heads";
             case SHARED_DISTANCE: return "the distance between the heads";
             case SHARED_COMMA: return "a comma before the coordinator";
+            case NAME_POSITIONS: return "the heads' places in their names (" + NAME_PLACES[a] + ", " + NAME_PLACES[FeatureKey.b(key)] + ")";
+            case LIST_FIRST: return "the first item of a comma list";
+            case LEFT_SUBORDINATE: return "a first head inside a subordinate clause" + (a == 1 ? ", before a clause with its own subject" : "");
             default: return name();
         }
     }

@@ -126,6 +126,9 @@ public final class CoordinationFeatureExtractor {
                 boolean properAfter = p.left() + 1 < w.length && t[p.left() + 1].startsWith("NNP");
                 int position = !proper ? 0 : properBefore ? 2 : properAfter ? 1 : 0;
                 out.add(CoordinationFeature.GROUP_POSITION.key(position, 0, pairClass), 1);
+                int leftPlace = namePlace(t, p.left());
+                int rightPlace = namePlace(t, p.right());
+                if (leftPlace + rightPlace > 0) out.add(CoordinationFeature.NAME_POSITIONS.key(leftPlace, rightPlace, 0), 1);
             }
             if (on(CoordinationFeatureFamily.PUNCTUATION)) {
                 int commas = 0;
@@ -135,7 +138,10 @@ public final class CoordinationFeatureExtractor {
                     if (t[k].equals("CC")) inner = true;
                 }
                 out.add(CoordinationFeature.COMMAS.key(Math.min(commas, 3), t[c - 1].equals(",") ? 1 : 0, pairClass), 1);
-                if (p.middle().length > 0) out.add(CoordinationFeature.LIST.key(0, 0, pairClass), 1);
+                if (p.middle().length > 0) {
+                    out.add(CoordinationFeature.LIST.key(0, 0, pairClass), 1);
+                    if (p.leftBegin() == 0 || !t[p.leftBegin() - 1].equals(",")) out.add(CoordinationFeature.LIST_FIRST.key(0, 0, pairClass), 1);
+                }
                 if (inner) out.add(CoordinationFeature.INNER_COORDINATOR.key(0, 0, pairClass), 1);
                 if (insideList(cc, i)) out.add(CoordinationFeature.INSIDE_LIST.key(0, 0, pairClass), 1);
             }
@@ -143,6 +149,9 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.COORDINATOR.key(coordinator, 0, pairClass), 1);
                 if (p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right())) {
                     out.add(CoordinationFeature.RIGHT_CLAUSE.key(0, 0, pairClass), 1);
+                }
+                if (p.leftClass() == HeadClass.VERB && subordinate(w, t, p.left())) {
+                    out.add(CoordinationFeature.LEFT_SUBORDINATE.key(p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right()) ? 1 : 0, 0, pairClass), 1);
                 }
                 int before = p.leftBegin() - 1;
                 out.add(CoordinationFeature.LEFT_CONTEXT.key(before >= 0 ? PennTags.id(t[before]) : 0, 0, pairClass), 1);
@@ -230,6 +239,28 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.SHARED_SIMILARITY.key(kind, 0, 0), thesaurus.similarity(a, b));
             }
         }
+    }
+
+    private static final java.util.Set<String> SUBORDINATORS = java.util.Set.of("that", "since", "while", "if", "because",
+            "when", "as", "although", "though", "whether", "where", "which", "who", "whom", "unless", "until", "after", "before", "once");
+
+    /** Whether a subordinator or relative word opens the clause of verb {@code k} (within a few words before it). */
+    static boolean subordinate(String[] w, String[] t, int k) {
+        for (int j = k - 1; j >= 0 && j >= k - 6; j--) {
+            String tag = t[j];
+            if (tag.equals(",") || tag.equals(".") || tag.equals(":") || tag.equals("CC")) return false;
+            if (SUBORDINATORS.contains(w[j].toLowerCase(java.util.Locale.ROOT)) && (tag.equals("IN") || tag.startsWith("W"))) return true;
+            if (tag.startsWith("VB") && j < k - 1 && !tag.equals("VBN") && !tag.equals("VBG")) return false;
+        }
+        return false;
+    }
+
+    /** Where token {@code k} stands in a run of proper nouns: 0 not a proper noun, 1 first, 2 last, 3 alone. */
+    static int namePlace(String[] t, int k) {
+        if (!t[k].startsWith("NNP")) return 0;
+        boolean before = k > 0 && t[k - 1].startsWith("NNP");
+        boolean after = k + 1 < t.length && t[k + 1].startsWith("NNP");
+        return after && !before ? 1 : before && !after ? 2 : !before ? 3 : 0;
     }
 
     /** Whether the left head of pair {@code i} is a middle item of another pair's list with the same last conjunct. */

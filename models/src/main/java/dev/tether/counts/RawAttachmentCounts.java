@@ -30,14 +30,16 @@ import java.util.zip.InflaterInputStream;
  *       unambiguous attachment also a hit (so the structural rates lean to what the unambiguous rule picks: the
  *       nearest verb, or a nearest noun with no verb near).</li>
  *   <li>{@link #ambiguous()}: the ambiguous verb–noun–preposition–noun configurations, counted as trials only (no
- *       outcome), for re-estimation ({@code dev.tether.model.RawReestimation}).</li>
+ *       outcome), for re-estimation ({@code dev.tether.attachment.AmbiguousReestimation}).</li>
+ *   <li>{@link #words()}: how often each noun and verb of the text occurred, keyed as the count tables key them,
+ *       for the domain report's vocabulary overlap with a base model.</li>
  * </ul>
  * Counts are whole numbers and words are numbered in sorted order, so the same documents give the same counts and
  * the same bytes however they were sharded and in whatever order the shards were merged. Immutable.
  */
 public final class RawAttachmentCounts {
     /** Layout version of the counts file; change it whenever the layout below changes. */
-    public static final int FORMAT_VERSION = 1;
+    public static final int FORMAT_VERSION = 2;
     private static final ChecksummedFile.Kind KIND = new ChecksummedFile.Kind("TETHER-RAW-COUNTS\n", "raw counts",
             "a counts file written by Tether's unlabelled attachment counter", "count the text again",
             "Count the text again with this version.");
@@ -45,6 +47,7 @@ public final class RawAttachmentCounts {
     private final QuadrupleCounts events;
     private final HeadChoiceCounts cooccurrence;
     private final QuadrupleCounts ambiguous;
+    private final WordFrequencies words;
     private final Tally tally;
 
     /**
@@ -62,16 +65,20 @@ public final class RawAttachmentCounts {
         static final Tally ZERO = new Tally(0, 0, 0, 0, 0, 0, 0);
     }
 
-    RawAttachmentCounts(QuadrupleCounts events, HeadChoiceCounts cooccurrence, QuadrupleCounts ambiguous, Tally tally) {
+    RawAttachmentCounts(QuadrupleCounts events, HeadChoiceCounts cooccurrence, QuadrupleCounts ambiguous,
+                        WordFrequencies words, Tally tally) {
         this.events = events;
         this.cooccurrence = cooccurrence;
         this.ambiguous = ambiguous;
+        this.words = words;
         this.tally = tally;
     }
 
     public QuadrupleCounts events() { return events; }
     public HeadChoiceCounts cooccurrence() { return cooccurrence; }
     public QuadrupleCounts ambiguous() { return ambiguous; }
+    /** Occurrences of the text's nouns and verbs (tokens tagged NN* or VB*), by normalized form. */
+    public WordFrequencies words() { return words; }
     public Tally tally() { return tally; }
 
     /** The counts as the bytes of a counts file (header, version, deflated payload, SHA-256). */
@@ -90,6 +97,7 @@ public final class RawAttachmentCounts {
             events.write(out);
             cooccurrence.write(out);
             ambiguous.write(out);
+            words.write(out);
         } catch (IOException e) {
             throw new java.io.UncheckedIOException("writing to memory cannot fail", e);
         } finally {
@@ -121,7 +129,8 @@ public final class RawAttachmentCounts {
             }
             Tally t = new Tally(in.readLong(), in.readLong(), in.readLong(), in.readLong(), in.readLong(), in.readLong(),
                     in.readLong());
-            return new RawAttachmentCounts(QuadrupleCounts.read(in), HeadChoiceCounts.read(in), QuadrupleCounts.read(in), t);
+            return new RawAttachmentCounts(QuadrupleCounts.read(in), HeadChoiceCounts.read(in), QuadrupleCounts.read(in),
+                    WordFrequencies.read(in), t);
         } catch (RawCountsFormatException e) {
             throw e;
         } catch (IOException | RuntimeException e) {

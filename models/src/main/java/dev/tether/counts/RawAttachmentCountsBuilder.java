@@ -18,6 +18,7 @@ public final class RawAttachmentCountsBuilder {
     private final QuadrupleCountsBuilder events = new QuadrupleCountsBuilder();
     private final HeadChoiceCountsBuilder cooccurrence = new HeadChoiceCountsBuilder();
     private final QuadrupleCountsBuilder ambiguous = new QuadrupleCountsBuilder();
+    private final WordFrequencies.Builder words = new WordFrequencies.Builder();
     private RawAttachmentCounts.Tally tally = RawAttachmentCounts.Tally.ZERO;
     private long prepositions;
     private long unambiguous;
@@ -76,6 +77,16 @@ public final class RawAttachmentCountsBuilder {
     /** How far left of the preposition (tokens) the unambiguous-attachment rule looks. */
     static final int WINDOW = 6;
 
+    /**
+     * Counts one token of the text with its Penn tag: a noun (NN*) or verb (VB*) joins {@link RawAttachmentCounts#words()}
+     * under its normalized form; other tokens are not counted there.
+     */
+    public void addToken(String word, String pennTag) {
+        if (pennTag == null || pennTag.length() < 2) return;
+        if (pennTag.startsWith("NN")) words.add(normalizer.noun(word));
+        else if (pennTag.startsWith("VB")) words.add(normalizer.verb(word));
+    }
+
     /** Counts that a document was read (its sentences and tokens), or that one was skipped. */
     public void addDocument(long sentences, long tokens) {
         tally = tally.plus(new RawAttachmentCounts.Tally(1, 0, sentences, tokens, 0, 0, 0));
@@ -90,12 +101,13 @@ public final class RawAttachmentCountsBuilder {
         events.addAll(other.events());
         cooccurrence.addAll(other.cooccurrence());
         ambiguous.addAll(other.ambiguous());
+        words.addAll(other.words());
         tally = tally.plus(other.tally());
     }
 
     /** The counts so far, words numbered in sorted order. */
     public RawAttachmentCounts build() {
         return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(),
-                tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples)));
+                words.build(), tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples)));
     }
 }

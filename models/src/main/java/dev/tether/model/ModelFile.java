@@ -47,7 +47,9 @@ import java.util.zip.InflaterInputStream;
  * {@code attachment-ranker} (its own version, feature families, feature keys and weights), {@code tagger} (a
  * part-of-speech tagger, see {@link TaggerSection}, with a version of its own) and {@code coordination-ranker}
  * ({@link CoordinationRanker}: its version, families, coordination counts and two weight sets; a model without it, or
- * with another version of it, loads and makes no coordination decisions); a reader
+ * with another version of it, loads and makes no coordination decisions) and {@code domain-report} ({@link DomainReport}:
+ * what raw text changed, with its own version; a model without it, or with another version of it, loads without a
+ * report); a reader
  * skips sections it does not know, so newer writers can add some. Writing is atomic: a temporary file in the same
  * folder, forced to disk, then renamed over the target. The same model always gives the same bytes.
  */
@@ -65,6 +67,8 @@ public final class ModelFile {
     /** Optional: each source's weight, in source order; written only when some weight is not 1. */
     private static final String SOURCE_WEIGHTS = "source-weights";
     private static final String COORDINATION_RANKER = "coordination-ranker";
+    /** Optional: what raw text changed ({@link DomainReport}, with a version of its own). */
+    private static final String DOMAIN_REPORT = "domain-report";
     private static final java.util.logging.Logger LOG = java.util.logging.Logger.getLogger(ModelFile.class.getName());
 
     private ModelFile() {
@@ -74,7 +78,7 @@ public final class ModelFile {
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
                 model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null),
-                model.coordinationRanker().orElse(null));
+                model.coordinationRanker().orElse(null), model.domainReport().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -105,8 +109,15 @@ public final class ModelFile {
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
                          CoordinationRanker coordination) throws IOException {
+        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus, coordination, null);
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
+                         CoordinationRanker coordination, DomainReport report) throws IOException {
         Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus);
         if (coordination != null) sections.put(COORDINATION_RANKER, section(out -> CoordinationRanker.write(coordination, out)));
+        if (report != null) sections.put(DOMAIN_REPORT, report.toBytes());
         return pack(sections);
     }
 
@@ -238,7 +249,19 @@ public final class ModelFile {
                             + "with 'tether train --conllu' to get them.");
                 }
             }
-            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus, coordination,
+            DomainReport report = null;
+            byte[] reportBytes = sections.get(DOMAIN_REPORT);
+            if (reportBytes != null) {
+                int version = DomainReport.version(reportBytes);
+                if (version == DomainReport.VERSION) {
+                    report = DomainReport.fromBytes(reportBytes);
+                } else {
+                    // Only 'inspect' reads the report: a model with another version of it loads without one.
+                    LOG.info(name + " has a domain report of version " + version + "; this build reads version "
+                            + DomainReport.VERSION + ", so 'tether inspect' cannot show it. Train the model again to get one.");
+                }
+            }
+            return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus, coordination, report,
                     java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;

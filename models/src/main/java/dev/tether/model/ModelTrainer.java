@@ -71,6 +71,9 @@ public final class ModelTrainer {
     private final List<AttachmentExample> examples = new ArrayList<>();
     private final List<AmbiguousReestimation.Estimate> rawEstimates = new ArrayList<>();
     private final List<Double> rawWeights = new ArrayList<>();
+    private final List<RawAttachmentCounts> rawCounts = new ArrayList<>();
+    private final List<DomainReport.RawSource> rawSources = new ArrayList<>();
+    private final List<String> baseNames = new ArrayList<>();
     private final List<LabelledQuadruple> exampleQuadruples = new ArrayList<>();
     private Set<AttachmentFeatureFamily> families = EnumSet.allOf(AttachmentFeatureFamily.class);
     private RankerTrainer rankerTrainer = new RankerTrainer();
@@ -168,6 +171,7 @@ public final class ModelTrainer {
                     + ", this build uses " + WordNormalizer.VERSION + "; retrain it from its sources");
         }
         baseModels.add(model);
+        baseNames.add(name);
         quadruples.addAll(model.quadruples());
         headChoice.addAll(model.headChoice());
         if (tagger == null) tagger = model.tagger().orElse(null);
@@ -192,6 +196,8 @@ public final class ModelTrainer {
         headChoice.addAll(estimate.headChoice(), weight);
         rawEstimates.add(estimate);
         rawWeights.add(weight);
+        rawCounts.add(raw);
+        rawSources.add(DomainReport.source(name, raw, estimate, weight, rounds));
         sources.add(new ModelSource(name, "raw", raw.tally().prepositions(), raw.tally().skippedDocuments(),
                 dev.tether.io.Sha256.hex(raw.toBytes()), weight));
         return this;
@@ -325,10 +331,13 @@ public final class ModelTrainer {
                 if (base.coordinationRanker().isPresent()) coordination = base.coordinationRanker().get();
             }
         }
+        DomainReport report = rawSources.isEmpty() ? null
+                : DomainReport.of(rawSources, rawCounts, baseModels, String.join("+", baseNames), counts);
         try {
-            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination);
+            byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus,
+                    coordination, report);
             return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination,
-                    ModelFile.fingerprint(encoded));
+                    report, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }

@@ -44,6 +44,7 @@ public final class TetherModel {
     private final CoordinationRanker coordinationRanker;
     private final Thesaurus thesaurus;
     private final QuadrupleScorer quadrupleScorer;
+    private final DomainReport domainReport;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
@@ -51,10 +52,18 @@ public final class TetherModel {
         this(normalizerVersion, sources, quadruples, headChoice, attachmentRanker, tagger, thesaurus, null, id);
     }
 
-    /** {@code coordinationRanker} is given the model's thesaurus (if any) for its similarity features. */
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
                 CoordinationRanker coordinationRanker, String id) {
+        this(normalizerVersion, sources, quadruples, headChoice, attachmentRanker, tagger, thesaurus, coordinationRanker,
+                null, id);
+    }
+
+    /** {@code coordinationRanker} is given the model's thesaurus (if any) for its similarity features. */
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
+                CoordinationRanker coordinationRanker, DomainReport domainReport, String id) {
+        this.domainReport = domainReport;
         this.coordinationRanker = coordinationRanker == null ? null : coordinationRanker.withThesaurus(thesaurus);
         this.normalizerVersion = normalizerVersion;
         this.sources = List.copyOf(sources);
@@ -108,6 +117,11 @@ public final class TetherModel {
      * the model has one, else the plain back-off ({@link BackedOffScorer}). Built once; thread-safe.
      */
     public QuadrupleScorer quadrupleScorer() { return quadrupleScorer; }
+    /**
+     * What raw text of the model's domain changed ({@link DomainReport}), for a model trained with {@code --raw} by
+     * this version of Tether; empty for other models.
+     */
+    public Optional<DomainReport> domainReport() { return Optional.ofNullable(domainReport); }
     /** The part-of-speech tagger trained with this model, if it was trained with one (opaque bytes; see {@link TaggerSection}). */
     public Optional<TaggerSection> tagger() { return Optional.ofNullable(tagger); }
 

@@ -10,6 +10,12 @@ import gnu.trove.list.array.TLongArrayList;
 import gnu.trove.map.hash.TIntIntHashMap;
 import gnu.trove.map.hash.TLongIntHashMap;
 
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.List;
+
 /**
  * Counts the contexts of every noun, verb and adjective in sentences tagged with Penn Treebank tags, for a
  * {@link ThesaurusBuilder}. Two kinds of context are counted, and the builder chooses among them:
@@ -27,6 +33,12 @@ import gnu.trove.map.hash.TLongIntHashMap;
  * {@link WordNormalizer#other}; a word's key carries its class, so the noun "book" and the verb "book" are two
  * entries. Ids and keys are integers and packed {@code long}s; the same sentences in the same order give the same
  * ids. Not thread-safe: one counter per counting thread, or feed it from one thread.
+ *
+ * <p>Counters of consecutive stretches of text merge exactly: {@link #append} adds the counts of a counter that
+ * counted the sentences coming after this one's, and gives the ids that one counter over all the sentences would have
+ * given (every id is assigned when its word, word class or context is first seen, so the later counter's new entries
+ * keep their order behind this one's). {@link #toBytes} and {@link #fromBytes} carry a counter between processes
+ * (the thesaurus built on Spark).
  */
 public final class ContextCounter {
     /** Tokens either side of a word that count as its window. */
@@ -44,6 +56,8 @@ public final class ContextCounter {
             PREPOSITION_HEAD = 7;
     static final int RELATION_SHIFT = 48;
     static final int PREPOSITION_SHIFT = 24;
+    private static final long WORD_KEY_MASK = (1L << PREPOSITION_SHIFT) - 1;
+    private static final int BYTES_MAGIC = 0x54434331; // "TCC1": Tether context counts, layout 1
 
     private final WordNormalizer normalizer = new WordNormalizer();
     private final HeadCandidateProposer proposer = new HeadCandidateProposer();
@@ -146,13 +160,17 @@ public final class ContextCounter {
     private void count(int target, int relation, int preposition, int wordKey) {
         if (target < 0) return;
         long contextKey = ((long) relation << RELATION_SHIFT) | ((long) preposition << PREPOSITION_SHIFT) | wordKey;
+        cells.adjustOrPutValue(cellKey(target, contextOf(contextKey)), 1, 1);
+    }
+
+    private int contextOf(long contextKey) {
         int context = contextIndex.get(contextKey);
         if (context < 0) {
             context = contextKeys.size();
             contextIndex.put(contextKey, context);
             contextKeys.add(contextKey);
         }
-        cells.adjustOrPutValue(cellKey(target, context), 1, 1);
+        return context;
     }
 
     private int targetOf(int key) {
@@ -197,6 +215,98 @@ public final class ContextCounter {
         int j = from;
         while (j + 1 < tags.length && isNoun(tags[j + 1])) j++;
         return j;
+    }
+
+    /**
+     * Adds the counts of {@code later}, which counted the sentences that follow the ones counted here; the result is
+     * what one counter would hold after counting both stretches in order, ids included.
+     */
+    public void append(ContextCounter later) {
+        int[] word = new int[later.vocabulary.size() + 1];
+        List<String> words = later.vocabulary.words();
+        for (int i = 0; i < words.size(); i++) word[i + 1] = vocabulary.add(words.get(i));
+        int[] target = new int[later.targetKeys.size()];
+        for (int t = 0; t < target.length; t++) {
+            target[t] = targetOf(remapWordKey(later.targetKeys.getQuick(t), word));
+            targetTokens.setQuick(target[t], targetTokens.getQuick(target[t]) + later.targetTokens.getQuick(t));
+        }
+        int[] context = new int[later.contextKeys.size()];
+        for (int c = 0; c < context.length; c++) {
+            long key = later.contextKeys.getQuick(c);
+            int preposition = (int) ((key >>> PREPOSITION_SHIFT) & Vocabulary.MAX_SIZE);
+            long remapped = ((long) relationOf(key) << RELATION_SHIFT) | ((long) word[preposition] << PREPOSITION_SHIFT)
+                    | remapWordKey((int) (key & WORD_KEY_MASK), word);
+            context[c] = contextOf(remapped);
+        }
+        later.cells.forEachEntry((cell, count) -> {
+            cells.adjustOrPutValue(cellKey(target[cellTarget(cell)], context[cellContext(cell)]), count, count);
+            return true;
+        });
+        sentences += later.sentences;
+        tokens += later.tokens;
+    }
+
+    private static int remapWordKey(int wordKey, int[] word) {
+        return (classOf(wordKey) << CLASS_SHIFT) | word[wordOf(wordKey)];
+    }
+
+    /** This counter as bytes, for {@link #fromBytes}: the same counts give the same bytes. */
+    public byte[] toBytes() {
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (DataOutputStream out = new DataOutputStream(bytes)) {
+            out.writeInt(BYTES_MAGIC);
+            List<String> words = vocabulary.words();
+            out.writeInt(words.size());
+            for (String w : words) out.writeUTF(w);
+            out.writeInt(targetKeys.size());
+            for (int t = 0; t < targetKeys.size(); t++) {
+                out.writeInt(targetKeys.getQuick(t));
+                out.writeLong(targetTokens.getQuick(t));
+            }
+            out.writeInt(contextKeys.size());
+            for (int c = 0; c < contextKeys.size(); c++) out.writeLong(contextKeys.getQuick(c));
+            long[] cellKeys = cells.keys();
+            long[] plain = new long[cellKeys.length];
+            for (int i = 0; i < cellKeys.length; i++) plain[i] = ((long) cellTarget(cellKeys[i]) << 32) | (cellContext(cellKeys[i]) & 0xffffffffL);
+            java.util.Arrays.sort(plain);
+            out.writeInt(plain.length);
+            for (long cell : plain) {
+                out.writeLong(cell);
+                out.writeInt(cells.get(cellKey((int) (cell >>> 32), (int) cell)));
+            }
+            out.writeLong(sentences);
+            out.writeLong(tokens);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return bytes.toByteArray();
+    }
+
+    /** The counter that {@link #toBytes} wrote; {@code what} names the bytes in the error when they are not one. */
+    public static ContextCounter fromBytes(byte[] data, String what) throws IOException {
+        ContextCounter c = new ContextCounter();
+        try (DataInputStream in = new DataInputStream(new java.io.ByteArrayInputStream(data))) {
+            if (in.readInt() != BYTES_MAGIC) throw new IOException(what + ": not the context counts of this Tether version");
+            int words = in.readInt();
+            for (int i = 0; i < words; i++) c.vocabulary.add(in.readUTF());
+            int targets = in.readInt();
+            for (int t = 0; t < targets; t++) {
+                c.targetOf(in.readInt());
+                c.targetTokens.setQuick(t, in.readLong());
+            }
+            int contexts = in.readInt();
+            for (int i = 0; i < contexts; i++) c.contextOf(in.readLong());
+            int cellCount = in.readInt();
+            for (int i = 0; i < cellCount; i++) {
+                long cell = in.readLong();
+                c.cells.put(cellKey((int) (cell >>> 32), (int) cell), in.readInt());
+            }
+            c.sentences = in.readLong();
+            c.tokens = in.readLong();
+        } catch (java.io.EOFException e) {
+            throw new IOException(what + ": the context counts end early", e);
+        }
+        return c;
     }
 
     // --- read access for the builder -------------------------------------------------------------------------

@@ -94,4 +94,49 @@ class ConjunctCandidateProposerTest {
         return ConjunctCandidateProposer.MAX_RIGHT
                 * (ConjunctCandidateProposer.MAX_SAME_CLASS + 3 * ConjunctCandidateProposer.MAX_OTHER_CLASS);
     }
+
+    @Test
+    void aSlashBetweenTwoWordsCoordinatesThemButNotInsideAndOr() {
+        TaggedWords s = TaggedWords.of("The/DT owner/NN //SYM skipper/NN signed/VBD the/DT seals/NNS and/CC //SYM or/CC gaskets/NNS ./.");
+        List<CoordinatorCandidates> all = proposer.proposeAll(s.words, s.tags);
+        CoordinatorCandidates slash = all.get(0);
+        assertEquals(2, slash.coordinator());
+        assertTrue(slash.indexOf(s.index("owner"), s.index("skipper")) >= 0);
+        // "and/or": the two words are the coordinators, the slash between them is not.
+        assertTrue(all.stream().noneMatch(c -> c.coordinator() == 8), all::toString);
+    }
+
+    @Test
+    void asWellAsAndRatherThanCoordinateWhatFollowsThem() {
+        TaggedWords s = TaggedWords.of("Replace/VB the/DT filters/NNS as/RB well/RB as/IN the/DT hoses/NNS ./.");
+        CoordinatorCandidates c = proposer.proposeAll(s.words, s.tags).get(0);
+        assertEquals(s.index("as"), c.coordinator());
+        assertTrue(c.indexOf(s.index("filters"), s.index("hoses")) >= 0);
+        TaggedWords r = TaggedWords.of("They/PRP patched/VBD the/DT hull/NN rather/RB than/IN replace/VB the/DT plate/NN ./.");
+        CoordinatorCandidates d = proposer.proposeAll(r.words, r.tags).get(0);
+        assertTrue(d.indexOf(r.index("patched"), r.index("replace")) >= 0);
+    }
+
+    @Test
+    void theBackwardScanStepsOverABracketedAside() {
+        TaggedWords s = TaggedWords.of("Call/VB Ines/NNP (/-LRB- ext./NN 52/CD )/-RRB- ,/, Bo/NNP (/-LRB- ext./NN 61/CD )/-RRB- or/CC Ada/NNP ./.");
+        CoordinatorCandidates c = proposer.proposeAll(s.words, s.tags).get(0);
+        assertTrue(c.indexOf(s.index("Ines"), s.index("Ada")) >= 0, "the first item of the list, before two asides");
+    }
+
+    @Test
+    void aNameAfterTheCoordinatorIsOfferedWithItsFirstAndItsLastWord() {
+        TaggedWords s = TaggedWords.of("Logs/NNS from/IN Harbour/NNP Ops/NNP and/CC North/NNP Quay/NNP Works/NNP ./.");
+        CoordinatorCandidates c = proposer.proposeAll(s.words, s.tags).get(0);
+        assertTrue(c.indexOf(s.index("Harbour"), s.index("North")) >= 0);
+        assertTrue(c.indexOf(s.index("Ops"), s.index("Works")) >= 0);
+    }
+
+    @Test
+    void afterASubordinateClauseTheMainClauseVerbIsAReading() {
+        TaggedWords s = TaggedWords.of("The/DT pump/NN failed/VBD but/CC if/IN the/DT seal/NN holds/VBZ ,/, keep/VB the/DT ferry/NN running/VBG ./.");
+        CoordinatorCandidates c = proposer.proposeAll(s.words, s.tags).get(0);
+        assertTrue(c.indexOf(s.index("failed"), s.index("keep")) >= 0);
+        assertTrue(c.indexOf(s.index("failed"), s.index("holds")) >= 0, "the subordinate clause's verb stays a reading");
+    }
 }

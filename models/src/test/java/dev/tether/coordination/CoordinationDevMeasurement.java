@@ -5,6 +5,7 @@ import dev.tether.evaluation.CoordinationEvaluation;
 import dev.tether.evaluation.CoordinationGoldTagEvaluator;
 import dev.tether.model.ModelTrainer;
 import dev.tether.model.TetherModel;
+import dev.tether.similarity.ThesaurusFile;
 import dev.tether.treebank.ConlluReader;
 import dev.tether.treebank.TreebankSentence;
 
@@ -15,14 +16,17 @@ import java.util.Map;
 /**
  * Trains only the coordination ranker from a treebank and scores it with gold tags on another (a development loop;
  * the figures of record come from {@code tether evaluate}). Run by hand with the models classpath:
- * {@code java -cp ... dev.tether.coordination.CoordinationDevMeasurement TRAIN DEV}.
+ * {@code java -cp ... dev.tether.coordination.CoordinationDevMeasurement TRAIN DEV [THESAURUS]}.
  */
 public final class CoordinationDevMeasurement {
     public static void main(String[] args) throws Exception {
         List<TreebankSentence> train = ConlluReader.readAll(Path.of(args[0]));
         List<TreebankSentence> dev = ConlluReader.readAll(Path.of(args[1]));
         long start = System.nanoTime();
-        TetherModel model = new ModelTrainer().addCoordinationSentences(train).build();
+        ModelTrainer trainer = new ModelTrainer().addCoordinationSentences(train);
+        // An optional third argument: a thesaurus file for the similarity and composition features.
+        if (args.length > 2) trainer.coordinationThesaurus(ThesaurusFile.read(Path.of(args[2])));
+        TetherModel model = trainer.build();
         CoordinationRanker ranker = model.coordinationRanker().orElseThrow();
         System.out.printf("trained in %.1f s: %d pair decisions, %d scope decisions, l2 %s / %s%n",
                 (System.nanoTime() - start) / 1e9, ranker.pairWeights().decisions(), ranker.scopeWeights().decisions(),

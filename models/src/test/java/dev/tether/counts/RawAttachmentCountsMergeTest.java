@@ -42,7 +42,10 @@ class RawAttachmentCountsMergeTest {
 
     private static RawAttachmentCounts count(List<AttachmentQuery> qs) {
         RawAttachmentCountsBuilder b = new RawAttachmentCountsBuilder();
-        for (AttachmentQuery q : qs) b.add(q);
+        for (AttachmentQuery q : qs) {
+            b.add(q);
+            tokens(q, b);
+        }
         b.addDocument(1, 10L * qs.size());
         return b.build();
     }
@@ -54,7 +57,10 @@ class RawAttachmentCountsMergeTest {
         all.addAll(b);
         all.addAll(c);
         RawAttachmentCountsBuilder one = new RawAttachmentCountsBuilder();
-        for (AttachmentQuery q : all) one.add(q);
+        for (AttachmentQuery q : all) {
+            one.add(q);
+            tokens(q, one);
+        }
         one.addDocument(1, 3000);
         one.addDocument(1, 2000);
         one.addDocument(1, 2500);
@@ -76,6 +82,14 @@ class RawAttachmentCountsMergeTest {
         assertArrayEquals(single, cba.build().toBytes());
         assertArrayEquals(single, bcThenA.build().toBytes());
         assertEquals(750, abc.build().tally().prepositions());
+        // Every query's object and first candidate were counted as words: 750 objects and 750 heads.
+        assertEquals(1500, abc.build().words().total());
+    }
+
+    /** The words of a query's sentence as the counter sees tokens: the object (a noun) and the first candidate. */
+    private static void tokens(AttachmentQuery q, RawAttachmentCountsBuilder b) {
+        b.addToken(q.object(), "NN");
+        b.addToken(q.head(0), q.headClass(0) == HeadClass.VERB ? "VBD" : "NN");
     }
 
     /** Ratnaparkhi's (1998) rule: a verb right before the phrase is unambiguous, a noun with a verb near is not. */

@@ -1,0 +1,53 @@
+package dev.tether.spark;
+
+import dev.tether.similarity.ContextCounter;
+import dev.tether.similarity.RawTextCounting;
+import dev.tether.similarity.RawTextTagger;
+import org.apache.spark.api.java.function.Function2;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Queue;
+import java.util.concurrent.ConcurrentLinkedQueue;
+
+/**
+ * One Spark task of {@code thesaurus build}: the consecutive documents of one partition read, tagged by the built-in
+ * preprocessing (one tagger per task slot, reused by later partitions) and counted in order into a
+ * {@link ContextCounter} of the task's own. The shard is the task's only result, so an attempt that fails takes its
+ * counts with it and a retried task never counts twice.
+ */
+final class PartitionContextCounting implements Function2<Integer, Iterator<ArrayList<String>>, Iterator<ContextShard>> {
+    private static final Queue<RawTextTagger> IDLE = new ConcurrentLinkedQueue<>();
+
+    @Override
+    public Iterator<ContextShard> call(Integer partition, Iterator<ArrayList<String>> files) throws Exception {
+        RawTextTagger tagger = IDLE.poll();
+        if (tagger == null) tagger = new RawTextTagger();
+        ContextCounter counter = new ContextCounter();
+        List<String[]> skipped = new ArrayList<>();
+        int documents = 0;
+        try {
+            while (files.hasNext()) {
+                for (String file : files.next()) {
+                    RawTextCounting.Document d = RawTextCounting.Document.of(Path.of(file), tagger);
+                    if (d.skip() != null) {
+                        skipped.add(new String[] {d.skip().name(), d.reason()});
+                        continue;
+                    }
+                    d.sentencesTo(counter::addSentence);
+                    documents++;
+                }
+            }
+        } finally {
+            IDLE.add(tagger);
+        }
+        return List.of(new ContextShard(partition, counter.toBytes(), documents, skipped)).iterator();
+    }
+
+    /** Releases the idle taggers (the end of an embedded run). */
+    static void closeAll() {
+        for (RawTextTagger t = IDLE.poll(); t != null; t = IDLE.poll()) t.close();
+    }
+}
