@@ -182,7 +182,8 @@ class CommandsOnSparkTest {
         assertEquals(Tether.SOME_FAILED, b.exitCode(), b::toString);
         assertTrue(b.out().contains("read     24 documents") && b.out().contains(", 2 task slots)"), b::toString);
         assertTrue(b.out().contains("binary") && b.out().contains("shift-99.txt"), b::toString);
-        assertTrue(Files.size(onSpark) > 0);
+        assertTrue(dev.tether.similarity.ThesaurusFile.read(onSpark).size(dev.tether.candidates.HeadClass.NOUN) > 10,
+                "the thesaurus compared holds words");
         assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark));
         CommandLineRun both = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out",
                 dir.resolve("x.thesaurus").toString(), "--threads", "2", "--spark", "local[2]");

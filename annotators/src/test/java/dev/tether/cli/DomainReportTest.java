@@ -101,7 +101,8 @@ class DomainReportTest {
                 "--out", again.toString());
         assertEquals(Tether.OK, second.exitCode(), second::toString);
         Path third = dir.resolve("third.tether");
-        CommandLineRun.of("train", "--raw-counts", counts.toString(), "--base", base.toString(), "--out", third.toString());
+        CommandLineRun thirdRun = CommandLineRun.of("train", "--raw-counts", counts.toString(), "--base", base.toString(), "--out", third.toString());
+        assertEquals(Tether.OK, thirdRun.exitCode(), thirdRun::toString);
         assertArrayEquals(Files.readAllBytes(again), Files.readAllBytes(third));
 
         // Without a base model: the events per source, and no comparison.

@@ -97,7 +97,7 @@ enum CoordinationFeature {
     SHARED_DISTANCE(CoordinationFeatureFamily.DISTANCE, 1),
     /** Sharing with a comma before the coordinator; parts: kind. */
     SHARED_COMMA(CoordinationFeatureFamily.PUNCTUATION, 1),
-    /** Where each head stands in a name (0 not a name, 1 first word, 2 last word, 3 one-word name); parts: left, right. */
+    /** Where each head stands in a name (0 not a name or an inner word, 1 first word, 2 last word, 3 one-word name); parts: left, right. */
     NAME_POSITIONS(CoordinationFeatureFamily.PARALLELISM, 1),
     /** The first head begins a comma list that ends at the coordinator; parts: class pair. */
     LIST_FIRST(CoordinationFeatureFamily.PUNCTUATION, 1),
@@ -106,7 +106,7 @@ enum CoordinationFeature {
 
     static final String[] COORDINATORS = {"", "and", "or", "but", "nor", "&", "yet", "plus", "so", "/", "as", "rather"};
     private static final CoordinationFeature[] ALL = values();
-    private static final String[] NAME_PLACES = {"not a name", "first word", "last word", "one word"};
+    private static final String[] NAME_PLACES = {"not a name, or inside one", "first word", "last word", "one word"};
 
     final CoordinationFeatureFamily family;
     final int minimumDecisions;

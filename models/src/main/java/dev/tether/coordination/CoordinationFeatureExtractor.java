@@ -241,21 +241,30 @@ public final class CoordinationFeatureExtractor {
         }
     }
 
-    private static final java.util.Set<String> SUBORDINATORS = java.util.Set.of("that", "since", "while", "if", "because",
-            "when", "as", "although", "though", "whether", "where", "which", "who", "whom", "unless", "until", "after", "before", "once");
+    /** Words that open a subordinate or relative clause (distinct from the proposer's lists, which bound conjuncts). */
+    private static final String[] SUBORDINATE_CLAUSE_OPENERS = {"that", "since", "while", "if", "because", "when", "as",
+            "although", "though", "whether", "where", "which", "who", "whom", "unless", "until", "after", "before", "once"};
 
     /** Whether a subordinator or relative word opens the clause of verb {@code k} (within a few words before it). */
     static boolean subordinate(String[] w, String[] t, int k) {
         for (int j = k - 1; j >= 0 && j >= k - 6; j--) {
             String tag = t[j];
             if (tag.equals(",") || tag.equals(".") || tag.equals(":") || tag.equals("CC")) return false;
-            if (SUBORDINATORS.contains(w[j].toLowerCase(java.util.Locale.ROOT)) && (tag.equals("IN") || tag.startsWith("W"))) return true;
+            if ((tag.equals("IN") || tag.startsWith("W")) && isOneOf(w[j], SUBORDINATE_CLAUSE_OPENERS)) return true;
             if (tag.startsWith("VB") && j < k - 1 && !tag.equals("VBN") && !tag.equals("VBG")) return false;
         }
         return false;
     }
 
-    /** Where token {@code k} stands in a run of proper nouns: 0 not a proper noun, 1 first, 2 last, 3 alone. */
+    private static boolean isOneOf(String word, String[] list) {
+        for (String s : list) if (s.equalsIgnoreCase(word)) return true;
+        return false;
+    }
+
+    /**
+     * Where token {@code k} stands in a run of proper nouns: 1 first, 2 last, 3 alone; 0 otherwise (not a proper noun,
+     * or an inner word of a name of three or more, which the feature treats alike).
+     */
     static int namePlace(String[] t, int k) {
         if (!t[k].startsWith("NNP")) return 0;
         boolean before = k > 0 && t[k - 1].startsWith("NNP");

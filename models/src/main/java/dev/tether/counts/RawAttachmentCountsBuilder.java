@@ -19,6 +19,9 @@ public final class RawAttachmentCountsBuilder {
     private final HeadChoiceCountsBuilder cooccurrence = new HeadChoiceCountsBuilder();
     private final QuadrupleCountsBuilder ambiguous = new QuadrupleCountsBuilder();
     private final WordFrequencies.Builder words = new WordFrequencies.Builder();
+    // Noun and verb tokens by surface form: normalized once per distinct form, in build(), not once per token.
+    private final WordFrequencies.Builder nounForms = new WordFrequencies.Builder();
+    private final WordFrequencies.Builder verbForms = new WordFrequencies.Builder();
     private RawAttachmentCounts.Tally tally = RawAttachmentCounts.Tally.ZERO;
     private long prepositions;
     private long unambiguous;
@@ -83,8 +86,8 @@ public final class RawAttachmentCountsBuilder {
      */
     public void addToken(String word, String pennTag) {
         if (pennTag == null || pennTag.length() < 2) return;
-        if (pennTag.startsWith("NN")) words.add(normalizer.noun(word));
-        else if (pennTag.startsWith("VB")) words.add(normalizer.verb(word));
+        if (pennTag.startsWith("NN")) nounForms.add(word);
+        else if (pennTag.startsWith("VB")) verbForms.add(word);
     }
 
     /** Counts that a document was read (its sentences and tokens), or that one was skipped. */
@@ -107,7 +110,13 @@ public final class RawAttachmentCountsBuilder {
 
     /** The counts so far, words numbered in sorted order. */
     public RawAttachmentCounts build() {
+        WordFrequencies.Builder all = new WordFrequencies.Builder();
+        all.addAll(words.build());
+        WordFrequencies nouns = nounForms.build();
+        for (int i = 0; i < nouns.size(); i++) all.add(normalizer.noun(nouns.word(i)), nouns.count(i));
+        WordFrequencies verbs = verbForms.build();
+        for (int i = 0; i < verbs.size(); i++) all.add(normalizer.verb(verbs.word(i)), verbs.count(i));
         return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(),
-                words.build(), tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples)));
+                all.build(), tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples)));
     }
 }

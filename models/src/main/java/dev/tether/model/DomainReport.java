@@ -53,6 +53,10 @@ public record DomainReport(List<RawSource> sources, String base, Overlap overlap
     /** The raw text's noun and verb vocabulary against the base model's. */
     public record Overlap(int baseVocabulary, int rawWords, int rawWordsInBase, long rawTokens, long rawTokensCovered,
                           List<NewWord> newWords) {
+        public Overlap {
+            newWords = List.copyOf(newWords);
+        }
+
         public double wordShare() {
             return rawWords == 0 ? 0 : (double) rawWordsInBase / rawWords;
         }

@@ -286,7 +286,7 @@ public final class ContextCounter {
     public static ContextCounter fromBytes(byte[] data, String what) throws IOException {
         ContextCounter c = new ContextCounter();
         try (DataInputStream in = new DataInputStream(new java.io.ByteArrayInputStream(data))) {
-            if (in.readInt() != BYTES_MAGIC) throw new IOException(what + ": not the context counts of this Tether version");
+            if (in.readInt() != BYTES_MAGIC) throw new IOException(what + ": not the context counts of this Tether version; run the driver and every executor with the same Tether jar");
             int words = in.readInt();
             for (int i = 0; i < words; i++) c.vocabulary.add(in.readUTF());
             int targets = in.readInt();

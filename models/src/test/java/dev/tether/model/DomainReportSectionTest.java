@@ -21,8 +21,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The model file's {@code domain-report} section: written for a model trained with raw counts, read back equal,
- * byte-identical for the same inputs, and optional: a model without it (the shipped default, trained before the
- * section existed) or with another version of it loads, without a report. Invented ferry words.
+ * byte-identical for the same inputs, and optional: a model without it (the shipped default, trained without raw
+ * text) or with another version of it loads, without a report. Invented ferry words.
  */
 class DomainReportSectionTest {
     @TempDir

@@ -20,13 +20,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ThesaurusRg65Test {
     /**
      * The floor. The settings are the defaults except the frequency floor (3 instead of 5, for a text 28 times
-     * smaller). Measured with them on this slice: Spearman {@value #MEASURED} over 58 of 65 pairs. The
+     * smaller). Measured with them on this slice: Spearman {@value #MEASURED} over 58 of 65 pairs, with the built-in
+     * preprocessing tagging with the default model's tagger (0.3521 when it tagged with the shipped OpenNLP model). The
      * build is deterministic, so the floor sits just under the measurement, to catch any change that makes the
      * thesaurus worse; it is also far above chance: a random ranking of 58 pairs has a Spearman correlation of 0 with a
-     * standard deviation of 1/sqrt(57) = 0.13 (so the floor is about 2.5 standard deviations above it).
+     * standard deviation of 1/sqrt(57) = 0.13 (so the floor is about 2.5 standard deviations above it). The floor was
+     * set under the earlier 0.3521 and is kept, 0.05 under today's figure.
      */
     private static final double FLOOR = 0.33;
-    private static final double MEASURED = 0.3521;
+    private static final double MEASURED = 0.3809;
 
     @TempDir
     Path dir;
