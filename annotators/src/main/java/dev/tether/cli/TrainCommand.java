@@ -246,6 +246,10 @@ final class TrainCommand implements Command {
                     out.printf("raw weight chosen on %d folds of %,d labelled quadruples (held-out backed-off accuracy; without raw %.2f%%):%s%n",
                             RawWeightChoice.FOLDS, choice.quadruples(), 100 * choice.withoutRaw(), row);
                 }
+                if (w == 0) {
+                    out.println("raw weight 0: on those folds no weight did better than leaving the raw text out, so its counts"
+                            + " are listed as a source but not used; give --raw-weight W to use them anyway");
+                }
             }
             out.printf("%-40s %,9d prepositions, weight %s, %d round%s of re-estimation%n", rawName, raw.tally().prepositions(),
                     InspectCommand.weight(w), rounds, rounds == 1 ? "" : "s");

@@ -188,12 +188,14 @@ public final class ModelTrainer {
      * as a source of kind {@code raw} with its weight; {@code sha256} identifies the counts.
      */
     public ModelTrainer addRawCounts(RawAttachmentCounts raw, String name, double weight, int rounds) {
-        if (!(weight > 0) || Double.isInfinite(weight)) {
-            throw new IllegalArgumentException("the weight of raw counts must be a positive number, was " + weight);
+        if (!(weight >= 0) || Double.isInfinite(weight)) {
+            throw new IllegalArgumentException("the weight of raw counts must be a number of at least 0, was " + weight);
         }
         AmbiguousReestimation.Estimate estimate = AmbiguousReestimation.of(raw, rounds);
-        quadruples.addAll(estimate.quadruples(), weight);
-        headChoice.addAll(estimate.headChoice(), weight);
+        if (weight > 0) {
+            quadruples.addAll(estimate.quadruples(), weight);
+            headChoice.addAll(estimate.headChoice(), weight);
+        }
         rawEstimates.add(estimate);
         rawWeights.add(weight);
         rawCounts.add(raw);
@@ -393,6 +395,7 @@ public final class ModelTrainer {
                 hc.addAll(base.headChoice());
             }
             for (int r = 0; r < rawEstimates.size(); r++) {
+                if (rawWeights.get(r) == 0) continue;
                 q4.addAll(rawEstimates.get(r).quadruples(), rawWeights.get(r));
                 hc.addAll(rawEstimates.get(r).headChoice(), rawWeights.get(r));
             }

@@ -17,7 +17,8 @@ import java.util.List;
  * each of {@value #FOLDS} contiguous folds of the labelled quadruples (given ones and those read off treebanks),
  * the back-off of Collins &amp; Brooks (1995) decides the fold's quadruples from the counts of the other folds (and of
  * base models) plus the raw counts times each candidate weight; the weight with the most correct decisions over all
- * folds wins (ties: the smaller weight). Since the pooled counts at a level are {@code labelled + w * raw}, one
+ * folds wins (ties: the smaller weight); when no weight beats leaving the raw counts out, the weight is 0 and the raw
+ * text counts for nothing (it stays listed as a source, with its weight). Since the pooled counts at a level are {@code labelled + w * raw}, one
  * look-up per quadruple and level serves every weight. Deterministic.
  */
 public final class RawWeightChoice {
@@ -69,7 +70,8 @@ public final class RawWeightChoice {
             accuracy[w] = n == 0 ? 0 : (double) correct[w] / n;
             if (correct[w] > correct[best]) best = w;
         }
-        return new Result(GRID[best], GRID.clone(), accuracy, n == 0 ? 0 : (double) correctWithout / n, n);
+        double chosen = correct[best] > correctWithout ? GRID[best] : 0;
+        return new Result(chosen, GRID.clone(), accuracy, n == 0 ? 0 : (double) correctWithout / n, n);
     }
 
     /** Hits and trials at each level (quadruple, triples, pairs, preposition): 8 numbers. */
