@@ -157,13 +157,9 @@ public final class SparkJob implements AutoCloseable {
     RawTextAttachmentCounting.Summary countRawText(List<Path> inputs, PartitionCounting.AfterDocument afterDocument)
             throws IOException {
         long start = System.nanoTime();
-        List<String> files = new ArrayList<>();
-        long notDocuments = 0;
-        for (Path p : inputs) {
-            DocumentFiles.Listing listing = DocumentFiles.list(p);
-            for (Path d : listing.documents()) files.add(d.toString());
-            notDocuments += listing.skippedTotal();
-        }
+        Documents listed = Documents.below(inputs);
+        List<String> files = listed.files();
+        long notDocuments = listed.notDocuments();
         List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
         CountShard all;
         try {
@@ -192,13 +188,9 @@ public final class SparkJob implements AutoCloseable {
      */
     public RawTextCounting.Summary countContexts(List<Path> inputs, ContextCounter into) throws IOException {
         long start = System.nanoTime();
-        List<String> files = new ArrayList<>();
-        long notDocuments = 0;
-        for (Path p : inputs) {
-            DocumentFiles.Listing listing = DocumentFiles.list(p);
-            for (Path d : listing.documents()) files.add(d.toString());
-            notDocuments += listing.skippedTotal();
-        }
+        Documents listed = Documents.below(inputs);
+        List<String> files = listed.files();
+        long notDocuments = listed.notDocuments();
         List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
         List<ContextShard> shards;
         try {
@@ -221,6 +213,20 @@ public final class SparkJob implements AutoCloseable {
         }
         return new RawTextCounting.Summary(documents, skipped, notDocuments, into.sentenceCount(), into.tokenCount(),
                 (System.nanoTime() - start) / 1e9);
+    }
+
+    /** The documents below the inputs, in the order a run on threads reads them, and the entries that are not documents. */
+    private record Documents(List<String> files, long notDocuments) {
+        static Documents below(List<Path> inputs) throws IOException {
+            List<String> files = new ArrayList<>();
+            long notDocuments = 0;
+            for (Path p : inputs) {
+                DocumentFiles.Listing listing = DocumentFiles.list(p);
+                for (Path d : listing.documents()) files.add(d.toString());
+                notDocuments += listing.skippedTotal();
+            }
+            return new Documents(files, notDocuments);
+        }
     }
 
     /** Stops the context this job started (not a lent one). */

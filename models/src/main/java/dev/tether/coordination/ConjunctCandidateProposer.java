@@ -443,7 +443,8 @@ public final class ConjunctCandidateProposer {
         return kind == NOUN || kind == PROPER || kind == PRONOUN || kind == NUMBER;
     }
 
-    private static boolean isOneOf(String word, String[] list) {
+    /** Whether {@code word} is one of {@code list}, ignoring case. */
+    static boolean isOneOf(String word, String[] list) {
         for (String s : list) if (s.equalsIgnoreCase(word)) return true;
         return false;
     }

@@ -250,14 +250,9 @@ public final class CoordinationFeatureExtractor {
         for (int j = k - 1; j >= 0 && j >= k - 6; j--) {
             String tag = t[j];
             if (tag.equals(",") || tag.equals(".") || tag.equals(":") || tag.equals("CC")) return false;
-            if ((tag.equals("IN") || tag.startsWith("W")) && isOneOf(w[j], SUBORDINATE_CLAUSE_OPENERS)) return true;
+            if ((tag.equals("IN") || tag.startsWith("W")) && ConjunctCandidateProposer.isOneOf(w[j], SUBORDINATE_CLAUSE_OPENERS)) return true;
             if (tag.startsWith("VB") && j < k - 1 && !tag.equals("VBN") && !tag.equals("VBG")) return false;
         }
-        return false;
-    }
-
-    private static boolean isOneOf(String word, String[] list) {
-        for (String s : list) if (s.equalsIgnoreCase(word)) return true;
         return false;
     }
 
