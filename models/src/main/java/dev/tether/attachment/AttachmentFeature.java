@@ -66,7 +66,24 @@ enum AttachmentFeature {
     /** Kind of the object with the preposition; parts: kind, preposition, class. */
     OBJECT_KIND_WITH_PREPOSITION(AttachmentFeatureFamily.OBJECT_CLASS, 2),
     /** Object word with preposition and class; parts: word, preposition, class. */
-    OBJECT_WORD(AttachmentFeatureFamily.OBJECT_CLASS, 3);
+    OBJECT_WORD(AttachmentFeatureFamily.OBJECT_CLASS, 3),
+    /**
+     * log((hits + ½) / (misses + ½)) pooled over the thesaurus neighbours of one word, each case weighted by its
+     * similarity; parts: slot (the {@code SIMILAR_} constants below), how much the exact counts of the same level saw
+     * (0 nothing, 1 under five cases, 2 more), class.
+     */
+    SIMILAR_LOG_ODDS(AttachmentFeatureFamily.SIMILAR_WORDS, 1),
+    /** log(1 + similarity-weighted cases) of the same pool; parts as {@link #SIMILAR_LOG_ODDS}. */
+    SIMILAR_TRIALS(AttachmentFeatureFamily.SIMILAR_WORDS, 1),
+    /** Log-odds of the similarity-smoothed quadruple estimate for this side; parts: basis, side (0 verb, 1 noun). */
+    SIMILAR_QUADRUPLE_ESTIMATE(AttachmentFeatureFamily.SIMILAR_WORDS, 1);
+
+    /**
+     * The pools of {@link #SIMILAR_LOG_ODDS}: the candidate's neighbours with the preposition, the candidate's
+     * neighbours with the preposition and object, the candidate with the preposition and the object's neighbours, and
+     * any word of the candidate's class with the preposition and the object's neighbours.
+     */
+    static final int SIMILAR_HEAD = 0, SIMILAR_HEAD_WITH_OBJECT = 1, SIMILAR_OBJECT = 2, SIMILAR_CLASS_OBJECT = 3;
 
     static final String[] LIGHT_VERBS = {"", "be", "have", "do", "make", "take", "get", "give", "go", "put", "come", "keep", "set"};
     static final String[] OBJECT_KINDS = {"other", "a pronoun", "a name", "a number", "a gerund", "a wh-word", "a noun"};
@@ -135,6 +152,17 @@ enum AttachmentFeature {
             case HEAD_WORD: return head + " with " + p + " in training";
             case OBJECT_KIND: return "the object being " + OBJECT_KINDS[a] + ", with a " + cls;
             case OBJECT_KIND_WITH_PREPOSITION: return p + " with " + OBJECT_KINDS[a] + " as object, with a " + cls;
+            case SIMILAR_LOG_ODDS: case SIMILAR_TRIALS: {
+                String object = "'" + q.object() + "'";
+                switch (a) {
+                    case SIMILAR_HEAD: return "counts of words like " + head + " ... " + p;
+                    case SIMILAR_HEAD_WITH_OBJECT: return "counts of words like " + head + " ... " + p + " " + object;
+                    case SIMILAR_OBJECT: return "counts of " + head + " ... " + p + " with words like " + object;
+                    default: return "counts of any " + cls + " ... " + p + " with words like " + object;
+                }
+            }
+            case SIMILAR_QUADRUPLE_ESTIMATE: return "the similarity-smoothed quadruple estimate ("
+                    + DecisionBasis.values()[a].label() + ") for the " + (b == 1 ? "noun" : "verb");
             default: return of(key).name().toLowerCase(Locale.ROOT);
         }
     }

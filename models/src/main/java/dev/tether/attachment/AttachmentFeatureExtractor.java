@@ -8,10 +8,15 @@ import dev.tether.counts.StructureKey;
 import dev.tether.counts.TupleCounts;
 import dev.tether.counts.TupleKey;
 import dev.tether.ranking.CandidateFeatures;
+import dev.tether.ranking.FeatureKey;
+import dev.tether.similarity.Thesaurus;
 import dev.tether.vocabulary.PennTags;
 import dev.tether.vocabulary.WordNormalizer;
 
+import java.util.ArrayList;
 import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 
 /**
@@ -19,12 +24,20 @@ import java.util.Set;
  * {@link AttachmentFeature}). Count statistics are read from {@code statistics}; word identities (head word,
  * preposition) are keyed by the ids of {@code lexicon}. At run time both are the model's own counts; at training the
  * statistics of a treebank event come from the counts of the other folds (a jackknife), so the ranker learns how far
- * to trust counts on words it has not seen, while the identities stay those of the whole model. Immutable and
- * thread-safe; the per-decision work uses integer ids and the caller's reusable buffer.
+ * to trust counts on words it has not seen, while the identities stay those of the whole model. With a thesaurus,
+ * the {@link AttachmentFeatureFamily#SIMILAR_WORDS} features pool the counts of the {@link #NEIGHBOURS} nearest
+ * neighbours of the candidate and of the object, each case weighted by the neighbour's similarity, keyed by how much
+ * the exact counts of the same level saw (nothing, a few cases, more), so that the ranker learns how far to trust the
+ * neighbours where the exact counts are thin. Immutable and thread-safe; the
+ * per-decision work uses integer ids and the caller's reusable buffer.
  */
 public final class AttachmentFeatureExtractor {
     private static final Part[] PARTS = Part.values();
     private static final double CLIP = 8;
+    /** Neighbours per word pooled by the similar-words features (chosen against 10 and 50 by cross-validated log-loss on EWT train; README). */
+    public static final int NEIGHBOURS = 20;
+    /** Exact cases below which the exact counts count as little evidence (the similar-words features' middle key). */
+    private static final double FEW_CASES = 5;
 
     private final HeadChoiceCounts statistics;
     private final HeadChoiceCounts lexicon;
@@ -35,9 +48,20 @@ public final class AttachmentFeatureExtractor {
     private final LexicalAssociationScorer association;
     private final boolean[] on = new boolean[AttachmentFeatureFamily.values().length];
     private final String[] lightVerbKeys = new String[AttachmentFeature.LIGHT_VERBS.length];
+    /** Null without a thesaurus (or with the similar-words family off). */
+    private final Thesaurus thesaurus;
+    /** For each thesaurus id, the word's id in {@code statistics} (0 when the statistics never saw it). */
+    private final int[] statisticsIds;
+    private final SimilarityBackedOffScorer similarQuadruples;
 
     public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
                                       WordNormalizer normalizer, Set<AttachmentFeatureFamily> families) {
+        this(statistics, quadruples, lexicon, normalizer, families, null);
+    }
+
+    /** As the five-argument constructor; {@code thesaurus} (may be null) feeds the similar-words features. */
+    public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
+                                      WordNormalizer normalizer, Set<AttachmentFeatureFamily> families, Thesaurus thesaurus) {
         this.statistics = statistics;
         this.lexicon = lexicon;
         this.quadruples = quadruples;
@@ -47,6 +71,22 @@ public final class AttachmentFeatureExtractor {
         this.association = new LexicalAssociationScorer(quadruples);
         for (AttachmentFeatureFamily f : families) on[f.ordinal()] = true;
         for (int i = 1; i < lightVerbKeys.length; i++) lightVerbKeys[i] = normalizer.verb(AttachmentFeature.LIGHT_VERBS[i]);
+        if (thesaurus != null && families.contains(AttachmentFeatureFamily.SIMILAR_WORDS)) {
+            this.thesaurus = thesaurus;
+            this.statisticsIds = new int[thesaurus.size()];
+            for (int t = 0; t < statisticsIds.length; t++) statisticsIds[t] = Math.max(0, statistics.words().id(thesaurus.key(t)));
+            this.similarQuadruples = new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer, NEIGHBOURS,
+                    SimilarityBackedOffScorer.MIN_TRIPLE_TRIALS, SimilarityBackedOffScorer.POWER, SimilarityBackedOffScorer.PAIR_BLEND);
+        } else {
+            this.thesaurus = null;
+            this.statisticsIds = null;
+            this.similarQuadruples = null;
+        }
+    }
+
+    /** The thesaurus the similar-words features read, if they are on. */
+    public Optional<Thesaurus> thesaurus() {
+        return Optional.ofNullable(thesaurus);
     }
 
     public Set<AttachmentFeatureFamily> families() {
@@ -85,6 +125,26 @@ public final class AttachmentFeatureExtractor {
             double s = association.decide(ids[0], ids[1], ids[2], ids[3]).score();
             la = Math.max(-CLIP, Math.min(CLIP, s));
         }
+        double similarNoun = Double.NaN;
+        int similarBasis = 0;
+        if (thesaurus != null && q.quadrupleVerb() >= 0 && q.quadrupleNoun() >= 0) {
+            int[] ids = quadruples.encode(normalizer, q.head(q.quadrupleVerb()), q.head(q.quadrupleNoun()), q.preposition(), q.object());
+            QuadrupleDecision d = similarQuadruples.decide(ids[0], ids[1], ids[2], ids[3], normalizer.verb(q.head(q.quadrupleVerb())),
+                    normalizer.noun(q.head(q.quadrupleNoun())), objectKey);
+            if (d.basis() == DecisionBasis.SIMILAR_QUADRUPLES || d.basis() == DecisionBasis.SIMILAR_TRIPLES) {
+                similarNoun = d.nounProbability();
+                similarBasis = d.basis().ordinal();
+            }
+        }
+        int sp = 0;
+        int so = 0;
+        int objectEntry = Thesaurus.UNKNOWN;
+        if (thesaurus != null) {
+            sp = Math.max(0, statistics.prepositions().id(prepositionKey));
+            so = Math.max(0, statistics.words().id(objectKey));
+            objectEntry = thesaurus.id(HeadClass.NOUN, objectKey);
+        }
+        double[] pool = new double[2];
 
         int[] seenOfClass = new int[HeadClass.values().length];
         for (int i = 0; i < n; i++) {
@@ -128,6 +188,21 @@ public final class AttachmentFeatureExtractor {
                 }
                 if (on(AttachmentFeatureFamily.ASSOCIATION)) {
                     out.add(AttachmentFeature.ASSOCIATION_SCORE.key(side, 0, 0), side == 0 ? la : -la);
+                }
+            }
+            if (side >= 0 && !Double.isNaN(similarNoun)) {
+                double pn = Math.max(1e-3, Math.min(1 - 1e-3, similarNoun));
+                double logit = Math.log(pn / (1 - pn));
+                out.add(AttachmentFeature.SIMILAR_QUADRUPLE_ESTIMATE.key(similarBasis, side, 0), side == 1 ? logit : -logit);
+            }
+            if (thesaurus != null && sp > 0) {
+                int headEntry = thesaurus.id(hc, headKey);
+                int sh = Math.max(0, statistics.words().id(headKey));
+                for (int slot = AttachmentFeature.SIMILAR_HEAD; slot <= AttachmentFeature.SIMILAR_CLASS_OBJECT; slot++) {
+                    if (!pool(slot, sp, c, sh, headEntry, so, objectEntry, pool, null)) continue;
+                    int seen = seenBucket(entries[i][exactPart(slot).ordinal()]);
+                    out.add(AttachmentFeature.SIMILAR_LOG_ODDS.key(slot, seen, c), Math.log((pool[0] + 0.5) / (pool[1] - pool[0] + 0.5)));
+                    out.add(AttachmentFeature.SIMILAR_TRIALS.key(slot, seen, c), Math.log1p(pool[1]));
                 }
             }
             if (on(AttachmentFeatureFamily.CLASS_PREPOSITION)) {
@@ -179,6 +254,90 @@ public final class AttachmentFeatureExtractor {
             }
         }
         return base;
+    }
+
+    /** The exact count level a similar-words pool stands in for. */
+    private static Part exactPart(int slot) {
+        switch (slot) {
+            case AttachmentFeature.SIMILAR_HEAD: return Part.HEAD;
+            case AttachmentFeature.SIMILAR_CLASS_OBJECT: return Part.CLASS_OBJECT;
+            default: return Part.HEAD_OBJECT;
+        }
+    }
+
+    private static int seenBucket(long entry) {
+        if (entry == TupleCounts.ABSENT) return 0;
+        return TupleCounts.trialsIn(entry) < FEW_CASES ? 1 : 2;
+    }
+
+    /**
+     * Pools into {@code out} (hits, cases) the counts of one similar-words slot over the neighbours of the candidate
+     * ({@code headEntry}) or of the object ({@code objectEntry}), each case weighted by similarity; returns whether
+     * any neighbour had cases. {@code contributions}, when given, receives "neighbour (weighted cases)" per neighbour
+     * that had some, for the evidence.
+     */
+    private boolean pool(int slot, int sp, int c, int sh, int headEntry, int so, int objectEntry, double[] out,
+                         List<double[]> contributions) {
+        out[0] = 0;
+        out[1] = 0;
+        boolean byHead = slot == AttachmentFeature.SIMILAR_HEAD || slot == AttachmentFeature.SIMILAR_HEAD_WITH_OBJECT;
+        int entry = byHead ? headEntry : objectEntry;
+        if (entry == Thesaurus.UNKNOWN) return false;
+        if (slot == AttachmentFeature.SIMILAR_HEAD_WITH_OBJECT && so == 0) return false;
+        if (slot == AttachmentFeature.SIMILAR_OBJECT && sh == 0) return false;
+        TupleCounts table = statistics.lexical(sp, exactPart(slot));
+        int k = Math.min(NEIGHBOURS, thesaurus.neighbourCount(entry));
+        for (int j = 0; j < k; j++) {
+            double s = thesaurus.neighbourScore(entry, j);
+            if (!(s > 0)) continue;
+            int w = statisticsIds[thesaurus.neighbourId(entry, j)];
+            if (w == 0) continue;
+            long key;
+            switch (slot) {
+                case AttachmentFeature.SIMILAR_HEAD: key = TupleKey.of(w, c + 1); break;
+                case AttachmentFeature.SIMILAR_HEAD_WITH_OBJECT: key = TupleKey.of(w, c + 1, so); break;
+                case AttachmentFeature.SIMILAR_OBJECT: key = TupleKey.of(sh, c + 1, w); break;
+                default: key = TupleKey.of(c + 1, w);
+            }
+            long e = table.find(key);
+            if (e == TupleCounts.ABSENT) continue;
+            out[0] += s * TupleCounts.hitsIn(e);
+            out[1] += s * TupleCounts.trialsIn(e);
+            if (contributions != null) contributions.add(new double[] {thesaurus.neighbourId(entry, j), s * TupleCounts.trialsIn(e)});
+        }
+        return out[1] > 0;
+    }
+
+    /**
+     * The neighbours whose counts fed feature {@code key} of candidate {@code i} (a similar-words feature), heaviest
+     * first, at most {@code limit}, as "word (weighted cases)"; the quadruple estimate's own neighbours for
+     * {@link AttachmentFeature#SIMILAR_QUADRUPLE_ESTIMATE}. Empty for other features. For the evidence, not the hot path.
+     */
+    List<String> neighboursBehind(long key, AttachmentQuery q, int i, int limit) {
+        List<String> names = new ArrayList<>();
+        if (thesaurus == null) return names;
+        AttachmentFeature template = AttachmentFeature.of(key);
+        if (template == AttachmentFeature.SIMILAR_QUADRUPLE_ESTIMATE) {
+            List<String> deciders = similarQuadruples.explain(new Quadruple(q.head(q.quadrupleVerb()), q.head(q.quadrupleNoun()),
+                    q.preposition(), q.object()));
+            return deciders.subList(0, Math.min(limit, deciders.size()));
+        }
+        if (template != AttachmentFeature.SIMILAR_LOG_ODDS && template != AttachmentFeature.SIMILAR_TRIALS) return names;
+        HeadClass hc = q.headClass(i);
+        String headKey = HeadChoiceScorer.headKey(normalizer, q.head(i), hc);
+        String objectKey = normalizer.noun(q.object());
+        int sp = Math.max(0, statistics.prepositions().id(normalizer.preposition(q.preposition())));
+        if (sp == 0) return names;
+        List<double[]> contributions = new ArrayList<>();
+        pool(FeatureKey.a(key), sp, hc.ordinal(), Math.max(0, statistics.words().id(headKey)),
+                thesaurus.id(hc, headKey), Math.max(0, statistics.words().id(objectKey)), thesaurus.id(HeadClass.NOUN, objectKey),
+                new double[2], contributions);
+        contributions.sort((x, y) -> x[1] != y[1] ? Double.compare(y[1], x[1]) : Double.compare(x[0], y[0]));
+        for (int j = 0; j < Math.min(limit, contributions.size()); j++) {
+            StringBuilder b = new StringBuilder().append(thesaurus.key((int) contributions.get(j)[0])).append(" (");
+            names.add(AttachmentRanker.twoDecimals(contributions.get(j)[1], b).append(')').toString());
+        }
+        return names;
     }
 
     private boolean on(AttachmentFeatureFamily f) {

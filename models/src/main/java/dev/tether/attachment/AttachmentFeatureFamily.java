@@ -27,7 +27,12 @@ public enum AttachmentFeatureFamily {
     /** Frequent head words with the preposition. */
     HEAD_WORDS,
     /** The kind of the object (pronoun, number, name, gerund, noun). */
-    OBJECT_CLASS;
+    OBJECT_CLASS,
+    /**
+     * Counts of the candidate's and the object's nearest neighbours in the model's thesaurus, and the similarity-smoothed
+     * quadruple estimate (Dagan, Lee &amp; Pereira 1999; Zhao &amp; Lin 2004); off when the model has no thesaurus.
+     */
+    SIMILAR_WORDS;
 
     public String label() {
         return name().toLowerCase(Locale.ROOT).replace('_', '-');

@@ -4,6 +4,7 @@ import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
 import dev.tether.ranking.CandidateFeatures;
 import dev.tether.ranking.RankerModel;
+import dev.tether.similarity.Thesaurus;
 import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.DataInput;
@@ -18,8 +19,9 @@ import java.util.Set;
  * Chooses the head of a prepositional phrase with a learned log-linear ranker over all its candidates: the
  * candidates' features ({@link AttachmentFeatureExtractor}) scored by trained weights, with a softmax over the
  * candidate set. The probability of a decision is the ranker's; the count evidence of each candidate is kept for
- * the ledger, and {@link #explain} names the features that weighed most for the chosen head against the runner-up.
- * Immutable and thread-safe (one reusable feature buffer per thread).
+ * the ledger, and {@link #explain} names the features that weighed most for the chosen head against the runner-up
+ * (with the thesaurus neighbours behind a similar-words feature). Immutable and thread-safe (one reusable feature
+ * buffer per thread).
  */
 public final class AttachmentRanker {
     /** Version of the stored ranker (its feature templates and layout); a model with another fails to load. */
@@ -28,13 +30,31 @@ public final class AttachmentRanker {
     private final RankerModel weights;
     private final Set<AttachmentFeatureFamily> families;
     private final AttachmentFeatureExtractor extractor;
+    private final HeadChoiceCounts counts;
+    private final QuadrupleCounts quadruples;
+    private final WordNormalizer normalizer;
     private final ThreadLocal<CandidateFeatures> buffers = ThreadLocal.withInitial(CandidateFeatures::new);
 
     public AttachmentRanker(RankerModel weights, Set<AttachmentFeatureFamily> families, HeadChoiceCounts counts,
                             QuadrupleCounts quadruples, WordNormalizer normalizer) {
+        this(weights, families, counts, quadruples, normalizer, null);
+    }
+
+    /** {@code thesaurus} (may be null) feeds the similar-words features when that family is on. */
+    public AttachmentRanker(RankerModel weights, Set<AttachmentFeatureFamily> families, HeadChoiceCounts counts,
+                            QuadrupleCounts quadruples, WordNormalizer normalizer, Thesaurus thesaurus) {
         this.weights = weights;
         this.families = EnumSet.copyOf(families);
-        this.extractor = new AttachmentFeatureExtractor(counts, quadruples, counts, normalizer, families);
+        this.counts = counts;
+        this.quadruples = quadruples;
+        this.normalizer = normalizer;
+        this.extractor = new AttachmentFeatureExtractor(counts, quadruples, counts, normalizer, families, thesaurus);
+    }
+
+    /** The same ranker reading {@code thesaurus} for its similar-words features (the model's own thesaurus). */
+    public AttachmentRanker withThesaurus(Thesaurus thesaurus) {
+        if (thesaurus == extractor.thesaurus().orElse(null)) return this;
+        return new AttachmentRanker(weights, families, counts, quadruples, normalizer, thesaurus);
     }
 
     public RankerModel weights() { return weights; }
@@ -98,6 +118,8 @@ public final class AttachmentRanker {
             used[top] = true;
             boolean ofBest = f.valueOf(best, keys[top]) != 0;
             String text = AttachmentFeature.describe(keys[top], q, ofBest ? best : second);
+            List<String> neighbours = extractor.neighboursBehind(keys[top], q, ofBest ? best : second, 3);
+            if (!neighbours.isEmpty()) text += ", neighbours " + String.join(", ", neighbours);
             reasons.add(new Reason(ofBest ? text : "against the runner-up: " + text, pull[top]));
         }
         return reasons;

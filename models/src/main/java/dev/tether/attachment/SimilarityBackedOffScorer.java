@@ -46,6 +46,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private final double minTripleTrials;
     private final double power;
     private final double pairBlend;
+    /** For each thesaurus id, the word's id in the counts (0 when the counts never saw it). */
+    private final int[] countIds;
 
     public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer) {
         this(counts, thesaurus, normalizer, NEIGHBOURS, MIN_TRIPLE_TRIALS, POWER, PAIR_BLEND);
@@ -68,6 +70,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         this.plain = new BackedOffScorer(counts);
         this.neighbours = neighbours;
         this.minTripleTrials = minTripleTrials;
+        this.countIds = new int[thesaurus.size()];
+        for (int t = 0; t < countIds.length; t++) countIds[t] = Math.max(0, counts.words().id(thesaurus.key(t)));
     }
 
     @Override
@@ -80,6 +84,11 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     public QuadrupleDecision decide(int v, int n1, int p, int n2) {
         Vocabulary w = counts.words();
         return decideKeys(v, n1, p, n2, v > 0 ? w.word(v) : null, n1 > 0 ? w.word(n1) : null, n2 > 0 ? w.word(n2) : null, null);
+    }
+
+    /** Decides a quadruple of count ids whose normalized words are given too (so unseen words still find neighbours). */
+    QuadrupleDecision decide(int v, int n1, int p, int n2, String verbKey, String nounKey, String objectKey) {
+        return decideKeys(v, n1, p, n2, verbKey, nounKey, objectKey, null);
     }
 
     /** Decides a quadruple given as words in the text (normalized here). */
@@ -167,8 +176,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
             double score = thesaurus.neighbourScore(t, i);
             if (!(score > 0)) continue;
             double s = power == 1 ? score : Math.pow(score, power);
-            int id = counts.words().id(thesaurus.key(nt));
-            if (id <= 0) continue;
+            int id = countIds[nt];
+            if (id == 0) continue;
             int sv = slot == 0 ? id : v, sn1 = slot == 1 ? id : n1, sn2 = slot == 2 ? id : n2;
             double qw = 0, tw = 0;
             if (sv > 0 && sn1 > 0 && sn2 > 0) {

@@ -405,7 +405,8 @@ public final class ModelTrainer {
                 Integer of = foldOfSource.get(q.source());
                 if (of == null || of != f) countQuadruple(q, q4, hc);
             }
-            AttachmentFeatureExtractor extractor = new AttachmentFeatureExtractor(hc.build(), q4.build(), lexicon, normalizer, families);
+            AttachmentFeatureExtractor extractor = new AttachmentFeatureExtractor(hc.build(), q4.build(), lexicon, normalizer, families,
+                    thesaurus);
             for (; next < n && fold[next] == f; next++) events.add(examples.get(next), 1.0, extractor);
         }
         return events.train(rankerTrainer);

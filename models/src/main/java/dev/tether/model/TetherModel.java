@@ -72,7 +72,7 @@ public final class TetherModel {
         this.tagger = tagger;
         this.id = id;
         this.headChoiceScorer = new HeadChoiceScorer(headChoice, normalizer, CLASS_WEIGHT, WORD_WEIGHT);
-        this.attachmentRanker = attachmentRanker;
+        this.attachmentRanker = attachmentRanker == null ? null : attachmentRanker.withThesaurus(thesaurus);
         this.thesaurus = thesaurus;
         this.quadrupleScorer = unlabelledOnly(sources) ? new LexicalAssociationScorer(quadruples)
                 : thesaurus == null ? new BackedOffScorer(quadruples)
