@@ -9,6 +9,8 @@ import dev.tether.io.QuadrupleReader;
 import dev.tether.io.Sha256;
 import dev.tether.treebank.TreebankExampleExtractor;
 import dev.tether.treebank.TreebankExamples;
+import dev.tether.treebank.ConlluReader;
+import dev.tether.treebank.TreebankSentence;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelTrainer;
@@ -17,6 +19,7 @@ import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.similarity.ThesaurusFile;
+import dev.tether.preprocessing.HeldOutTagging;
 import dev.tether.preprocessing.TreebankTaggerTrainer;
 import dev.tether.spark.SparkJob;
 import dev.tether.spark.SparkLibraries;
@@ -32,6 +35,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 
 /**
@@ -268,7 +272,9 @@ final class TrainCommand implements Command {
                     thesaurus.size(), thesaurus.settings().weighting() + "/" + thesaurus.settings().measure());
         }
         if (a.has("no-tagger")) trainer.withTagger(null);
-        else if (!treebanks.isEmpty()) trainTagger(a.values("conllu"), trainer, out);
+        else if (!treebanks.isEmpty() && trainTagger(a.values("conllu"), trainer, out) && !a.has("no-ranker")) {
+            addHeldOutTagged(a.values("conllu"), extractor, trainer, out);
+        }
         long start = System.nanoTime();
         TetherModel model = trainer.build();
         out.printf("built the model in %.1f s%n", (System.nanoTime() - start) / 1e9);
@@ -284,18 +290,55 @@ final class TrainCommand implements Command {
         return problems > 0 || skippedDocuments > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
-    /** Trains the model's tagger from the treebanks' Penn tags; without any, says so and leaves the tagger as it is. */
-    private static void trainTagger(List<String> files, ModelTrainer trainer, PrintStream out) throws IOException {
+    /**
+     * Trains the model's tagger from the treebanks' Penn tags and says whether it did; without any usable tags, says
+     * so and leaves the tagger as it is.
+     */
+    private static boolean trainTagger(List<String> files, ModelTrainer trainer, PrintStream out) throws IOException {
         TreebankTaggerTrainer tagger = new TreebankTaggerTrainer();
         for (String f : files) out.println("tagger: " + tagger.add(Path.of(f)).summary());
         if (tagger.sentences() == 0) {
             out.println("tagger: none trained (no usable Penn Treebank tags); the model "
                     + (trainer.hasTagger() ? "keeps the base model's tagger" : "leaves the shipped OpenNLP tagger in use"));
-            return;
+            return false;
         }
         TaggerSection section = tagger.train();
         trainer.withTagger(section);
         out.printf("tagger: %s (%,d bytes)%n", section.description(), section.size());
+        return true;
+    }
+
+    /**
+     * The treebanks' attachments as the model's own tagger would present them on new text: every sentence tagged by a
+     * tagger trained without its fold ({@link HeldOutTagging}), for the ranker's temperature.
+     */
+    private static void addHeldOutTagged(List<String> files, TreebankExampleExtractor extractor, ModelTrainer trainer,
+                                         PrintStream out) throws IOException {
+        long start = System.nanoTime();
+        List<TreebankSentence> sentences = new ArrayList<>();
+        List<String> names = new ArrayList<>();
+        for (String f : files) {
+            sentences.addAll(ConlluReader.readAll(Path.of(f)));
+            names.add(Path.of(f).getFileName().toString());
+        }
+        List<TreebankSentence> retagged = HeldOutTagging.retag(sentences, ModelTrainer.JACKKNIFE_FOLDS, String.join(", ", names));
+        long words = 0, same = 0;
+        TreebankExamples examples = new TreebankExamples();
+        for (int i = 0; i < sentences.size(); i++) {
+            String[] gold = sentences.get(i).xposTags();
+            String[] tagged = retagged.get(i).xposTags();
+            for (int w = 0; w < gold.length; w++) {
+                if ("_".equals(gold[w])) continue;
+                words++;
+                if (gold[w].equals(tagged[w])) same++;
+            }
+            extractor.add(retagged.get(i), examples);
+        }
+        trainer.addCalibrationExamples(examples.examples());
+        out.printf(Locale.ROOT, "calibration: %,d attachments with tags from %d taggers each trained without its fold "
+                        + "(%.2f%% of %,d tags as the treebank's) for the ranker's temperature (%.1f s)%n",
+                examples.examples().size(), ModelTrainer.JACKKNIFE_FOLDS, words == 0 ? 0.0 : 100.0 * same / words, words,
+                (System.nanoTime() - start) / 1e9);
     }
 
     private static int positiveInt(String value, String option) throws UsageException {

@@ -117,23 +117,30 @@ public final class AttachmentFeatureExtractor {
         double quadrupleNoun = Double.NaN;
         int quadrupleBasis = 0;
         double la = Double.NaN;
-        if (q.quadrupleVerb() >= 0 && q.quadrupleNoun() >= 0 && (on(AttachmentFeatureFamily.BACKED_OFF) || on(AttachmentFeatureFamily.ASSOCIATION))) {
-            int[] ids = quadruples.encode(normalizer, q.head(q.quadrupleVerb()), q.head(q.quadrupleNoun()), q.preposition(), q.object());
-            QuadrupleDecision d = backedOff.decide(ids[0], ids[1], ids[2], ids[3]);
-            quadrupleNoun = d.nounProbability();
-            quadrupleBasis = d.basis().ordinal();
-            double s = association.decide(ids[0], ids[1], ids[2], ids[3]).score();
-            la = Math.max(-CLIP, Math.min(CLIP, s));
-        }
         double similarNoun = Double.NaN;
         int similarBasis = 0;
-        if (thesaurus != null && q.quadrupleVerb() >= 0 && q.quadrupleNoun() >= 0) {
-            int[] ids = quadruples.encode(normalizer, q.head(q.quadrupleVerb()), q.head(q.quadrupleNoun()), q.preposition(), q.object());
-            QuadrupleDecision d = similarQuadruples.decide(ids[0], ids[1], ids[2], ids[3], normalizer.verb(q.head(q.quadrupleVerb())),
-                    normalizer.noun(q.head(q.quadrupleNoun())), objectKey);
-            if (d.basis() == DecisionBasis.SIMILAR_QUADRUPLES || d.basis() == DecisionBasis.SIMILAR_TRIPLES) {
-                similarNoun = d.nounProbability();
-                similarBasis = d.basis().ordinal();
+        boolean quadrupleFeatures = on(AttachmentFeatureFamily.BACKED_OFF) || on(AttachmentFeatureFamily.ASSOCIATION) || thesaurus != null;
+        if (q.quadrupleVerb() >= 0 && q.quadrupleNoun() >= 0 && quadrupleFeatures) {
+            // The quadruple's words are normalized once; the smoothed estimate needs the keys of words the counts never saw.
+            String verbKey = normalizer.verb(q.head(q.quadrupleVerb()));
+            String nounKey = normalizer.noun(q.head(q.quadrupleNoun()));
+            int v = quadruples.words().id(verbKey);
+            int n1 = quadruples.words().id(nounKey);
+            int p = quadruples.prepositions().id(prepositionKey);
+            int n2 = quadruples.words().id(objectKey);
+            if (on(AttachmentFeatureFamily.BACKED_OFF) || on(AttachmentFeatureFamily.ASSOCIATION)) {
+                QuadrupleDecision d = backedOff.decide(v, n1, p, n2);
+                quadrupleNoun = d.nounProbability();
+                quadrupleBasis = d.basis().ordinal();
+                double s = association.decide(v, n1, p, n2).score();
+                la = Math.max(-CLIP, Math.min(CLIP, s));
+            }
+            if (thesaurus != null) {
+                QuadrupleDecision d = similarQuadruples.decide(v, n1, p, n2, verbKey, nounKey, objectKey);
+                if (d.basis() == DecisionBasis.SIMILAR_QUADRUPLES || d.basis() == DecisionBasis.SIMILAR_TRIPLES) {
+                    similarNoun = d.nounProbability();
+                    similarBasis = d.basis().ordinal();
+                }
             }
         }
         int sp = 0;

@@ -144,7 +144,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
             contributions.sort((a, b) -> Double.compare(quadLevel ? b.quadWeight : b.tripleWeight, quadLevel ? a.quadWeight : a.tripleWeight));
             for (int i = 0; i < Math.min(3, contributions.size()); i++) {
                 Contribution c = contributions.get(i);
-                deciders.add(c.slot + " " + c.word + "\u2192" + c.neighbour + String.format(" (%.2f)", quadLevel ? c.quadWeight : c.tripleWeight));
+                StringBuilder line = new StringBuilder().append(c.slot).append(' ').append(c.word).append('\u2192').append(c.neighbour).append(" (");
+                deciders.add(AttachmentRanker.twoDecimals(quadLevel ? c.quadWeight : c.tripleWeight, line).append(')').toString());
             }
         }
         return d;

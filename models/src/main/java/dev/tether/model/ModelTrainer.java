@@ -69,6 +69,8 @@ public final class ModelTrainer {
     private final List<TetherModel> baseModels = new ArrayList<>();
     private final List<LabelledQuadruple> fixedQuadruples = new ArrayList<>();
     private final List<AttachmentExample> examples = new ArrayList<>();
+    private final List<AttachmentExample> calibrationExamples = new ArrayList<>();
+    private int calibrationDecisions;
     private final List<AmbiguousReestimation.Estimate> rawEstimates = new ArrayList<>();
     private final List<Double> rawWeights = new ArrayList<>();
     private final List<RawAttachmentCounts> rawCounts = new ArrayList<>();
@@ -129,6 +131,23 @@ public final class ModelTrainer {
         if (example.gold() < 0) return;
         examples.add(example);
         countExample(example, headChoice);
+    }
+
+    /**
+     * Head-choice examples as the run time will see them: the treebank's own prepositions with the tags of a tagger
+     * that never saw their sentences (the same {@link AttachmentExample#source()} as the example they stand beside).
+     * They count nothing and train no weight; the ranker's temperature is fitted on them, each scored by the
+     * cross-validation ranker that did not see its training counterpart, so that the stated probabilities match what
+     * running text gives rather than what gold tags give. Examples whose source is not a training example's are ignored.
+     */
+    public ModelTrainer addCalibrationExamples(List<AttachmentExample> asTagged) {
+        calibrationExamples.addAll(asTagged);
+        return this;
+    }
+
+    /** How many calibration decisions fitted the temperature in the last {@link #build} (0: the training decisions did). */
+    public int calibrationDecisions() {
+        return calibrationDecisions;
     }
 
     private void countExample(AttachmentExample example, HeadChoiceCountsBuilder heads) {
@@ -314,7 +333,7 @@ public final class ModelTrainer {
         HeadChoiceCounts heads = headChoice.build();
         AttachmentRanker ranker = null;
         if (rankerWanted && !examples.isEmpty()) {
-            ranker = new AttachmentRanker(trainRanker(heads), families, heads, counts, normalizer);
+            ranker = new AttachmentRanker(trainRanker(heads), trainedFamilies(), heads, counts, normalizer);
         } else if (rankerWanted) {
             // No examples of its own: keep the ranker of the (last) base model that has one, over the new counts.
             for (TetherModel base : baseModels) {
@@ -376,6 +395,13 @@ public final class ModelTrainer {
         return coordinationThesaurus != null ? coordinationThesaurus : thesaurus;
     }
 
+    /** The families the ranker is trained with: the chosen ones, without similar-words when there is no thesaurus. */
+    private Set<AttachmentFeatureFamily> trainedFamilies() {
+        EnumSet<AttachmentFeatureFamily> used = EnumSet.copyOf(families);
+        if (thesaurus == null) used.remove(AttachmentFeatureFamily.SIMILAR_WORDS);
+        return used;
+    }
+
     private RankerModel trainRanker(HeadChoiceCounts lexicon) {
         int n = examples.size();
         int k = Math.min(JACKKNIFE_FOLDS, n);
@@ -386,6 +412,16 @@ public final class ModelTrainer {
             foldOfSource.put(examples.get(j).source(), fold[j]);
         }
         AttachmentRankerTrainer events = new AttachmentRankerTrainer();
+        // The calibration examples of each fold, in their given order, beside the training example of the same source.
+        Map<String, Integer> exampleOfSource = new HashMap<>();
+        for (int j = 0; j < n; j++) exampleOfSource.putIfAbsent(examples.get(j).source(), j);
+        List<List<AttachmentExample>> calibrationOfFold = new ArrayList<>();
+        for (int f = 0; f < k; f++) calibrationOfFold.add(new ArrayList<>());
+        for (AttachmentExample c : calibrationExamples) {
+            Integer j = exampleOfSource.get(c.source());
+            if (j != null) calibrationOfFold.get(fold[j]).add(c);
+        }
+        Map<String, Integer> positionOfSource = new HashMap<>();
         int next = 0;
         for (int f = 0; f < k; f++) {
             QuadrupleCountsBuilder q4 = new QuadrupleCountsBuilder();
@@ -405,10 +441,17 @@ public final class ModelTrainer {
                 Integer of = foldOfSource.get(q.source());
                 if (of == null || of != f) countQuadruple(q, q4, hc);
             }
-            AttachmentFeatureExtractor extractor = new AttachmentFeatureExtractor(hc.build(), q4.build(), lexicon, normalizer, families,
+            AttachmentFeatureExtractor extractor = new AttachmentFeatureExtractor(hc.build(), q4.build(), lexicon, normalizer, trainedFamilies(),
                     thesaurus);
-            for (; next < n && fold[next] == f; next++) events.add(examples.get(next), 1.0, extractor);
+            for (; next < n && fold[next] == f; next++) {
+                int position = events.add(examples.get(next), 1.0, extractor);
+                if (position >= 0) positionOfSource.putIfAbsent(examples.get(next).source(), position);
+            }
+            for (AttachmentExample c : calibrationOfFold.get(f)) {
+                events.addCalibration(c, positionOfSource.getOrDefault(c.source(), -1), extractor);
+            }
         }
+        calibrationDecisions = events.calibrationDecisions();
         return events.train(rankerTrainer);
     }
 }

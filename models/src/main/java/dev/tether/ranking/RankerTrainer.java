@@ -51,6 +51,17 @@ public final class RankerTrainer {
     }
 
     public Result train(RankingData data, int dimension) {
+        return train(data, dimension, null, null);
+    }
+
+    /**
+     * As {@link #train(RankingData, int)}, with the temperature fitted on {@code calibration} instead of the training
+     * decisions themselves: decisions as the run time will see them (for example the same sentences with tags from a
+     * tagger that did not see them), each scored by the cross-validation ranker that did not see the training decision
+     * at {@code positions[d]} (its place in {@code data}, so a calibration decision is held out exactly as its training
+     * counterpart is). Null or empty {@code calibration}: the held-out training decisions, as without it.
+     */
+    public Result train(RankingData data, int dimension, RankingData calibration, int[] positions) {
         data.seal();
         int n = data.decisions();
         if (n == 0) throw new IllegalArgumentException("no training decisions: nothing to train the ranker on");
@@ -106,7 +117,9 @@ public final class RankerTrainer {
                     chosenIndex = s;
                 }
             }
-            temperature = fitTemperature(data, foldRankers[chosenIndex], k);
+            temperature = calibration != null && calibration.seal().decisions() > 0
+                    ? fitTemperature(calibration, positions, n, foldRankers[chosenIndex], k)
+                    : fitTemperature(data, foldRankers[chosenIndex], k);
         }
         Fit all = fit(data, range(0, 0, n), chosen, dimension);
         return new Result(all.ranker, chosen, trials, all.iterations, temperature);
@@ -161,6 +174,32 @@ public final class RankerTrainer {
                 gold[d] = data.gold(d);
                 weights[d] = data.weight(d);
             }
+        }
+        return 1 / fitInverseTemperature(scores, gold, weights);
+    }
+
+    /**
+     * Temperature scaling fitted on calibration decisions: decision {@code d} is scored by the fold ranker of the fold
+     * that holds training position {@code positions[d]} (folds as in {@link #train}, over {@code n} training decisions).
+     */
+    private static double fitTemperature(RankingData calibration, int[] positions, int n, LogLinearRanker[] foldRankers, int k) {
+        int m = calibration.decisions();
+        if (positions == null || positions.length != m) {
+            throw new IllegalArgumentException("give one training position per calibration decision (" + m + ")");
+        }
+        double[][] scores = new double[m][];
+        int[] gold = new int[m];
+        double[] weights = new double[m];
+        for (int d = 0; d < m; d++) {
+            if (positions[d] < 0 || positions[d] >= n) {
+                throw new IllegalArgumentException("calibration decision " + d + " names training position " + positions[d]
+                        + ", outside the " + n + " training decisions");
+            }
+            int f = 0;
+            while (f + 1 < k && (int) ((long) n * (f + 1) / k) <= positions[d]) f++;
+            scores[d] = foldRankers[f].scores(calibration, d);
+            gold[d] = calibration.gold(d);
+            weights[d] = calibration.weight(d);
         }
         return 1 / fitInverseTemperature(scores, gold, weights);
     }

@@ -134,6 +134,11 @@ public final class TreebankSentence {
     public String[] forms() { return forms.clone(); }
     /** A copy of the language-specific tags (Penn Treebank tags in English treebanks). */
     public String[] xposTags() { return xpos.clone(); }
+
+    /** The same sentence with other fine tags in column 5 (a tagger's, say); everything else as it is. */
+    public TreebankSentence withXposTags(String[] tags) {
+        return new TreebankSentence(source, text, forms, upos, tags, heads, relations, begins, ends, lines, enhanced);
+    }
     /** A copy of the universal part-of-speech tags. */
     public String[] uposTags() { return upos.clone(); }
 

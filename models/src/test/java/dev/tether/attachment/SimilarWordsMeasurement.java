@@ -60,7 +60,8 @@ public final class SimilarWordsMeasurement {
                 if (round >= 2) best[m] = Math.min(best[m], seconds);
             }
         }
-        int decisions = examples.examples().size();
+        int decisions = 0;
+        for (AttachmentExample e : examples.examples()) if (e.query().size() > 0) decisions++;
         System.out.printf("head choice: without %.0f, with %.0f decisions/s (ratio %.2f; checksum %d)%n",
                 decisions / best[0], decisions / best[1], best[0] / best[1], sink);
     }

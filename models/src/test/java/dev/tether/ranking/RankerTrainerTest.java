@@ -112,6 +112,52 @@ class RankerTrainerTest {
                 "no held-out folds, no temperature");
     }
 
+    /** {@code data}'s decisions again, the gold of every {@code every}-th one moved to the next candidate (0: none). */
+    private static RankingData copyWithGoldMoved(RankingData data, int every) {
+        RankingData out = new RankingData();
+        for (int d = 0; d < data.decisions(); d++) {
+            int candidates = data.endCandidate(d) - data.firstCandidate(d);
+            int gold = every > 0 && d % every == 0 ? (data.gold(d) + 1) % candidates : data.gold(d);
+            out.startDecision(gold, data.weight(d));
+            for (int c = data.firstCandidate(d); c < data.endCandidate(d); c++) {
+                out.addCandidate();
+                for (int e = data.firstEntry(c); e < data.endEntry(c); e++) out.addFeature(data.feature(e), data.value(e));
+            }
+        }
+        return out.seal();
+    }
+
+    private static int[] identity(int n) {
+        int[] p = new int[n];
+        for (int i = 0; i < n; i++) p[i] = i;
+        return p;
+    }
+
+    @Test
+    void calibrationDecisionsFitTheTemperatureEachHeldOutAsItsTrainingCounterpart() {
+        RankingData data = separable(31, 300);
+        RankerTrainer trainer = new RankerTrainer(new double[] {0.1, 1}, 4, new Lbfgs(300, 1e-9));
+        RankerTrainer.Result plain = trainer.train(data, 8);
+        RankerTrainer.Result same = trainer.train(data, 8, copyWithGoldMoved(data, 0), identity(data.decisions()));
+        assertEquals(plain.temperature(), same.temperature(), 0.0,
+                "the training decisions themselves as calibration decisions, each at its own position: the same temperature");
+        assertEquals(plain.ranker(), same.ranker(), "calibration decisions train no weight");
+
+        // As with tags from a tagger that never saw the sentence: the ranker is wrong more often than on the training
+        // decisions, so its scores must be flattened further.
+        RankerTrainer.Result noisier = trainer.train(data, 8, copyWithGoldMoved(data, 4), identity(data.decisions()));
+        assertTrue(plain.temperature() < 4, "the separable set's own held-out folds want sharp probabilities: " + plain.temperature());
+        assertTrue(noisier.temperature() > plain.temperature() * 1.05,
+                "noisier calibration decisions raise the temperature: " + noisier.temperature() + " against " + plain.temperature());
+
+        assertThrows(IllegalArgumentException.class, () -> trainer.train(data, 8, copyWithGoldMoved(data, 0), new int[3]),
+                "one position per calibration decision");
+        int[] outside = identity(data.decisions());
+        outside[7] = data.decisions();
+        assertThrows(IllegalArgumentException.class, () -> trainer.train(data, 8, copyWithGoldMoved(data, 0), outside),
+                "a position outside the training decisions");
+    }
+
     @Test
     void badInputIsRefused() {
         RankingData empty = new RankingData();
