@@ -1,11 +1,17 @@
 package dev.tether.benchmarks;
 
+import dev.tether.io.QuadrupleReader;
 import dev.tether.model.LoadedModels;
+import dev.tether.model.ModelFile;
+import dev.tether.model.ModelTrainer;
 import dev.tether.pipeline.CollectionRun;
 import dev.tether.pipeline.DocumentFiles;
 import dev.tether.pipeline.TetherPipeline;
+import dev.tether.preprocessing.TextPreprocessor;
 import dev.tether.treebank.ConlluReader;
 import dev.tether.treebank.TreebankSentence;
+import org.apache.uima.analysis_engine.AnalysisEngineDescription;
+import org.apache.uima.fit.factory.AnalysisEngineFactory;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
@@ -29,6 +35,9 @@ import java.util.stream.Stream;
  * What {@code tether annotate} does, end to end from raw text files to XMI, ledger and manifest, over the same
  * documents (the {@code # text} sentences of a UD English EWT file, 20 per document file):
  * <ul>
+ *   <li>{@link #previousReleaseOneThread}: one thread as the release before the ranker issue annotated: chunker on and
+ *       the shipped OpenNLP tagger (the default model then carried no tagger of its own), resolved with the default
+ *       model; this is the "today's single-thread throughput" the collection issue measures against;</li>
  *   <li>{@link #chunkedOneThread}: one thread with the chunker, as every run did before the chunker became optional;</li>
  *   <li>{@link #oneThread}: one thread, no chunker (the default now);</li>
  *   <li>{@link #twoThreads}: two threads (two pipelines sharing one loaded model), no chunker.</li>
@@ -47,6 +56,8 @@ public class CollectionThroughput {
     private Path folder;
     private DocumentFiles.Listing listing;
     private String modelId;
+    /** A model with counts only (the RRR quadruples in test-corpora), so that its preprocessing uses the shipped tagger. */
+    private Path taggerlessModel;
 
     @Setup(Level.Trial)
     public void setUp() throws Exception {
@@ -70,14 +81,31 @@ public class CollectionThroughput {
         listing = DocumentFiles.list(in);
         modelId = LoadedModels.get("default").id();
         Files.createDirectories(folder.resolve("out"));
+        taggerlessModel = folder.resolve("counts-only.tether");
+        ModelFile.write(new ModelTrainer().trainRanker(false)
+                .addQuadruples(new QuadrupleReader(false).read(Path.of("test-corpora/data/rrr/training"))).build(),
+                taggerlessModel);
+    }
+
+    private CollectionRun.Result annotate(int threads, AnalysisEngineDescription pipeline, boolean chunks)
+            throws Exception {
+        CollectionRun.Settings settings = new CollectionRun.Settings("default", modelId, chunks, threads, true, "benchmark");
+        CollectionRun.Result r = new CollectionRun(listing, folder.resolve("out"), settings, done -> { }).run(pipeline);
+        if (!r.failed().isEmpty()) throw new IllegalStateException("documents failed: " + r.failed());
+        return r;
     }
 
     private CollectionRun.Result annotate(int threads, boolean chunks) throws Exception {
-        CollectionRun.Settings settings = new CollectionRun.Settings("default", modelId, chunks, threads, true, "benchmark");
-        CollectionRun.Result r = new CollectionRun(listing, folder.resolve("out"), settings, done -> { })
-                .run(TetherPipeline.forRawText("default", chunks));
-        if (!r.failed().isEmpty()) throw new IllegalStateException("documents failed: " + r.failed());
-        return r;
+        return annotate(threads, TetherPipeline.forRawText("default", chunks), chunks);
+    }
+
+    @Benchmark
+    public long previousReleaseOneThread() throws Exception {
+        AnalysisEngineDescription pipeline = AnalysisEngineFactory.createEngineDescription(
+                AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class,
+                        TextPreprocessor.PARAM_MODEL, taggerlessModel.toString(), TextPreprocessor.PARAM_CHUNK, true),
+                TetherPipeline.resolution("default"));
+        return annotate(1, pipeline, true).decisions();
     }
 
     @Benchmark
