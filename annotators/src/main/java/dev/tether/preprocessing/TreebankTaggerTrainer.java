@@ -74,7 +74,19 @@ public final class TreebankTaggerTrainer {
 
     private final List<POSSample> samples = new ArrayList<>();
     private final List<String> files = new ArrayList<>();
+    private final int iterations;
     private long words;
+
+    /** A trainer of the model's own tagger: {@value #ITERATIONS} iterations. */
+    public TreebankTaggerTrainer() {
+        this(ITERATIONS);
+    }
+
+    /** A trainer that stops after {@code iterations} iterations of the maximum entropy trainer (at least 1). */
+    public TreebankTaggerTrainer(int iterations) {
+        if (iterations < 1) throw new IllegalArgumentException("a tagger needs at least 1 iteration, got " + iterations);
+        this.iterations = iterations;
+    }
 
     /** Reads a CoNLL-U file (plain or gzip) and keeps its usable sentences. */
     public FileTally add(Path conllu) throws IOException {
@@ -123,7 +135,7 @@ public final class TreebankTaggerTrainer {
         }
         TrainingParameters parameters = new TrainingParameters();
         parameters.put(TrainingParameters.ALGORITHM_PARAM, GISTrainer.MAXENT_VALUE);
-        parameters.put(TrainingParameters.ITERATIONS_PARAM, ITERATIONS);
+        parameters.put(TrainingParameters.ITERATIONS_PARAM, iterations);
         parameters.put(TrainingParameters.CUTOFF_PARAM, CUTOFF);
         parameters.put(TrainingParameters.THREADS_PARAM, THREADS);
         POSModel model = POSTaggerME.train("en", new CollectionObjectStream<>(samples), parameters, new POSTaggerFactory());
@@ -131,7 +143,7 @@ public final class TreebankTaggerTrainer {
         for (POSSample s : samples) tags.addAll(List.of(s.getTags()));
         String description = String.format(Locale.ROOT,
                 "OpenNLP %s maximum entropy, %d iterations, cutoff %d, %d threads; %,d sentences, %,d words, %d tags from %s",
-                Version.currentVersion(), ITERATIONS, CUTOFF, THREADS, samples.size(), words, tags.size(), String.join(", ", files));
+                Version.currentVersion(), iterations, CUTOFF, THREADS, samples.size(), words, tags.size(), String.join(", ", files));
         return new TaggerSection(description, PosModelBytes.pack(model), "the model being trained");
     }
 }

@@ -90,13 +90,13 @@ class HeldOutTaggingTest {
         int from = n * 4 / 5;
         List<TreebankSentence> lastFold = sentences.subList(from, n);
         List<TreebankSentence> lastRetagged = retagged.subList(from, n);
-        TreebankTaggerTrainer others = new TreebankTaggerTrainer();
+        TreebankTaggerTrainer others = new TreebankTaggerTrainer(HeldOutTagging.ITERATIONS);
         others.add("others", sentences.subList(0, from));
         POSTaggerME heldOut = new POSTaggerME(PosModelBytes.unpack(others.train()), POSTagFormat.PENN);
         for (int s = 0; s < lastFold.size(); s++) {
             assertArrayEquals(heldOut.tag(lastFold.get(s).forms()), lastRetagged.get(s).xposTags(), "sentence " + (from + s));
         }
-        TreebankTaggerTrainer everything = new TreebankTaggerTrainer();
+        TreebankTaggerTrainer everything = new TreebankTaggerTrainer(HeldOutTagging.ITERATIONS);
         everything.add("all", sentences);
         POSTaggerME sawIt = new POSTaggerME(PosModelBytes.unpack(everything.train()), POSTagFormat.PENN);
         List<TreebankSentence> byOneThatSawIt = lastFold.stream().map(t -> t.withXposTags(sawIt.tag(t.forms()))).toList();
@@ -110,5 +110,27 @@ class HeldOutTaggingTest {
     @Test
     void fewerThanTwoFoldsIsRefused() throws Exception {
         assertThrows(IllegalArgumentException.class, () -> HeldOutTagging.retag(fixture(), 1, "ferry-logs-tagged.conllu"));
+    }
+
+    @Test
+    void theFoldTaggersStopAfterTheirOwnIterations() throws Exception {
+        // The fold taggers train for fewer iterations than the model's own tagger (that keeps training the default
+        // model under two minutes). A fold is tagged by a tagger of exactly the iterations asked for: one iteration
+        // gives the tags of a one-iteration tagger, and they agree with the treebank less than a full tagger's.
+        List<TreebankSentence> sentences = withAWordOnlyTheLastFoldHas();
+        int n = sentences.size(), from = n * 4 / 5;
+        List<TreebankSentence> once = HeldOutTagging.retag(sentences, 5, 1, "ferry-logs-tagged.conllu");
+        List<TreebankSentence> full = HeldOutTagging.retag(sentences, 5, TreebankTaggerTrainer.ITERATIONS, "ferry-logs-tagged.conllu");
+        TreebankTaggerTrainer others = new TreebankTaggerTrainer(1);
+        others.add("others", sentences.subList(0, from));
+        POSTaggerME oneIteration = new POSTaggerME(PosModelBytes.unpack(others.train()), POSTagFormat.PENN);
+        for (int s = from; s < n; s++) {
+            assertArrayEquals(oneIteration.tag(sentences.get(s).forms()), once.get(s).xposTags(), "sentence " + s);
+        }
+        double onceAgreement = agreement(sentences, once), fullAgreement = agreement(sentences, full);
+        assertTrue(onceAgreement < fullAgreement, "one iteration (" + onceAgreement + ") against "
+                + TreebankTaggerTrainer.ITERATIONS + " (" + fullAgreement + ")");
+        assertTrue(HeldOutTagging.ITERATIONS < TreebankTaggerTrainer.ITERATIONS);
+        assertThrows(IllegalArgumentException.class, () -> new TreebankTaggerTrainer(0));
     }
 }

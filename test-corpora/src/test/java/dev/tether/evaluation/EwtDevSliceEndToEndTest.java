@@ -128,7 +128,7 @@ class EwtDevSliceEndToEndTest {
 
     /*
      * Coordination scope on the same run (the coordination resolver is in the raw-text pipeline). Measured with the
-     * shipped default model 4b84daae4691 (December 2026): 180 gold coordinations in the slice (a cc whose head is a
+     * shipped default model 251c2b83a797 (December 2026): 180 gold coordinations in the slice (a cc whose head is a
      * conj); both conjunct heads right for 96 = 0.533 (Wilson 95% interval 0.461-0.605); the nearest word before the
      * coordinator with the last conjunct's class (as the pipeline tagged it), same run, 74 = 0.411. Scope decisions on
      * the gold modifiers the pipeline decided: 66 of 67 right, against never-shared 50 = 0.746 and always-shared 0.254.
