@@ -279,6 +279,11 @@ final class TrainCommand implements Command {
         TetherModel model = trainer.build();
         out.printf("built the model in %.1f s%n", (System.nanoTime() - start) / 1e9);
         RankerSummary.print(model, out);
+        if (ModelTrainer.thesaurusUnusedByRanker(model)) {
+            out.println("thesaurus: the attachment ranker, kept from the base model, was trained without a thesaurus and"
+                    + " does not read it; only the quadruple scorer's similarity smoothing uses it (add a treebank,"
+                    + " --conllu, to train the ranker's similar-words features)");
+        }
         ModelFile.write(model, target);
         out.printf("wrote %s  (model %s, %,.0f quadruples counted%s)%n", target, model.id(), model.quadruples().total(),
                 skipped > 0 ? String.format(", %,d malformed lines skipped", skipped) : "");

@@ -23,6 +23,7 @@ import dev.tether.coordination.CoordinationFeatureFamily;
 import dev.tether.coordination.CoordinationRanker;
 import dev.tether.coordination.CoordinationRankerTrainer;
 import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
 import dev.tether.treebank.CoordinationExampleExtractor;
 import dev.tether.treebank.TreebankSentence;
 import dev.tether.counts.HeadChoiceCounts;
@@ -32,7 +33,6 @@ import dev.tether.counts.QuadrupleCountsBuilder;
 import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.io.QuadrupleSet;
 import dev.tether.ranking.RankerModel;
-import dev.tether.similarity.Thesaurus;
 import dev.tether.ranking.RankerTrainer;
 import dev.tether.treebank.TreebankExamples;
 import dev.tether.vocabulary.WordNormalizer;
@@ -339,6 +339,7 @@ public final class ModelTrainer {
             for (TetherModel base : baseModels) {
                 if (base.attachmentRanker().isPresent()) {
                     AttachmentRanker r = base.attachmentRanker().get();
+                    checkKeptRankerThesaurus(base, r);
                     ranker = new AttachmentRanker(r.weights(), r.families(), heads, counts, normalizer);
                 }
             }
@@ -362,6 +363,40 @@ public final class ModelTrainer {
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }
+    }
+
+    /**
+     * A ranker kept from a base model learned its similar-words weights on that model's thesaurus; the same weights
+     * over another thesaurus's neighbours would weigh evidence they were never fitted to, so that is refused (a
+     * treebank trains the ranker again with the new thesaurus).
+     */
+    private void checkKeptRankerThesaurus(TetherModel base, AttachmentRanker kept) {
+        if (!kept.families().contains(AttachmentFeatureFamily.SIMILAR_WORDS)) return;
+        Thesaurus before = base.thesaurus().orElse(null);
+        if (sameThesaurus(before, thesaurus)) return;
+        throw new IllegalStateException("base model " + base.id() + " has a ranker whose similar-words weights were "
+                + "learned on its own thesaurus, and this model gets " + (thesaurus == null ? "none" : "another one")
+                + "; add a treebank (--conllu) so that the ranker is trained again with the new thesaurus, or leave "
+                + "the thesaurus out to keep the base model's");
+    }
+
+    private static boolean sameThesaurus(Thesaurus a, Thesaurus b) {
+        if (a == b) return true;
+        if (a == null || b == null) return false;
+        try {
+            return java.util.Arrays.equals(ThesaurusFile.toBytes(a), ThesaurusFile.toBytes(b));
+        } catch (IOException e) {
+            throw new UncheckedIOException("encoding a thesaurus in memory failed", e);
+        }
+    }
+
+    /**
+     * Whether the model will carry a thesaurus that its attachment ranker does not read: a ranker kept from a base
+     * model trained without one (the thesaurus then serves the quadruple scorer's similarity smoothing only).
+     */
+    public static boolean thesaurusUnusedByRanker(TetherModel model) {
+        return model.thesaurus().isPresent() && model.attachmentRanker().isPresent()
+                && !model.attachmentRanker().get().families().contains(AttachmentFeatureFamily.SIMILAR_WORDS);
     }
 
     /** The coordination ranker from the treebank sentences, null when they hold no usable coordination. */

@@ -19,6 +19,8 @@ import java.util.List;
 import java.util.Random;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -132,5 +134,45 @@ class SimilarWordsFeaturesTest {
         TetherModel reloaded = ModelFile.read(file);
         assertEquals(toolChoice.probability(1), reloaded.chooseHead(tool).probability(1), 1e-12,
                 "a model read back uses its stored thesaurus for the same features");
+    }
+
+    @Test
+    void aRankerKeptFromABaseModelKeepsTheThesaurusItWasTrainedOn() {
+        Thesaurus thesaurus = thesaurus();
+        TetherModel with = train(thesaurus);
+        TetherModel without = train(null);
+        LabelledQuadruple extra = new LabelledQuadruple(new Quadruple("fitted", "seal", "with", "spanner-key"), AttachmentSite.VERB, "ferry-log:extra");
+
+        // Same thesaurus (taken over from the base, or the same one given again): the ranker is kept.
+        TetherModel kept = new ModelTrainer().addModel(with, "with").build();
+        assertTrue(kept.attachmentRanker().orElseThrow().families().contains(AttachmentFeatureFamily.SIMILAR_WORDS));
+        ModelTrainer again = new ModelTrainer().addModel(with, "with").withThesaurus(thesaurus());
+        again.addQuadruple(extra);
+        assertTrue(again.build().attachmentRanker().isPresent(), "an equal thesaurus keeps the ranker");
+
+        // Another thesaurus, or none, under similar-words weights fitted on the first: refused, saying what to do.
+        Thesaurus other = ThesaurusBuilder.build(otherCounter(), ThesaurusSettings.DEFAULT.withMinFrequency(3).withMaxContextWords(1000), 1);
+        IllegalStateException e = assertThrows(IllegalStateException.class,
+                () -> new ModelTrainer().addModel(with, "with").withThesaurus(other).build());
+        assertTrue(e.getMessage().contains(with.id()) && e.getMessage().contains("--conllu"), e.getMessage());
+        assertThrows(IllegalStateException.class, () -> new ModelTrainer().addModel(with, "with").withThesaurus(null).build());
+
+        // A base ranker trained without a thesaurus is kept; the thesaurus then serves the quadruple scorer only.
+        TetherModel plain = new ModelTrainer().addModel(without, "without").withThesaurus(thesaurus).build();
+        assertTrue(ModelTrainer.thesaurusUnusedByRanker(plain));
+        assertFalse(ModelTrainer.thesaurusUnusedByRanker(with));
+        assertFalse(ModelTrainer.thesaurusUnusedByRanker(without));
+    }
+
+    /** Other invented sentences, so another thesaurus over some of the same words. */
+    private static ContextCounter otherCounter() {
+        ContextCounter counter = new ContextCounter();
+        Random r = new Random(11);
+        String[] tools = with(TOOLS, UNSEEN_TOOL);
+        for (int i = 0; i < 2000; i++) {
+            counter.addSentence(new String[] {"A", "deckhand", "stowed", "the", tools[r.nextInt(tools.length)], "below", "."},
+                    new String[] {"DT", "NN", "VBD", "DT", "NN", "RB", "."});
+        }
+        return counter;
     }
 }
