@@ -36,7 +36,8 @@ import java.util.stream.Stream;
  * documents (the {@code # text} sentences of a UD English EWT file, 20 per document file):
  * <ul>
  *   <li>{@link #previousReleaseOneThread}: one thread as the release before the ranker issue annotated: chunker on and
- *       the shipped OpenNLP tagger (the default model then carried no tagger of its own), resolved with the default
+ *       the shipped OpenNLP tagger through OpenNLP's own decoder (the default model then carried no tagger of its
+ *       own), resolved with the default
  *       model; this is the "today's single-thread throughput" the collection issue measures against;</li>
  *   <li>{@link #chunkedOneThread}: one thread with the chunker, as every run did before the chunker became optional;</li>
  *   <li>{@link #oneThread}: one thread, no chunker (the default now);</li>
@@ -103,7 +104,8 @@ public class CollectionThroughput {
     public long previousReleaseOneThread() throws Exception {
         AnalysisEngineDescription pipeline = AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class,
-                        TextPreprocessor.PARAM_MODEL, taggerlessModel.toString(), TextPreprocessor.PARAM_CHUNK, true),
+                        TextPreprocessor.PARAM_MODEL, taggerlessModel.toString(), TextPreprocessor.PARAM_CHUNK, true,
+                        TextPreprocessor.PARAM_LIBRARY_TAGGER, true),
                 TetherPipeline.resolution("default"));
         return annotate(1, pipeline, true).decisions();
     }

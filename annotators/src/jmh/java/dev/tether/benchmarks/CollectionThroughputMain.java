@@ -15,12 +15,15 @@ import java.util.Map;
  * gain of two threads over one. Tokens are
  * counted as {@link ResolutionThroughput} counts them. JMH options are passed through.
  *
- * <p>{@code interleaved ROUNDS} instead runs the four variants in turn, ROUNDS times (after one warm-up round), and
+ * <p>{@code interleaved ROUNDS} instead runs the four variants in turn, ROUNDS times (after {@value #WARM_UP_ROUNDS} warm-up rounds: the JIT needs a few runs of each variant), and
  * prints the median time of each and the median of the per-round ratios. JMH measures one variant after the other,
  * minutes apart; on a machine shared with other work the load changes in between, and interleaving keeps the
  * variants of one round under the same load.
  */
 public final class CollectionThroughputMain {
+    /** Rounds run before the measured ones, and not measured. */
+    static final int WARM_UP_ROUNDS = 3;
+
     private CollectionThroughputMain() {
     }
 
@@ -51,7 +54,7 @@ public final class CollectionThroughputMain {
         com.sun.management.OperatingSystemMXBean os =
                 (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         try {
-            for (int round = -1; round < rounds; round++) {
+            for (int round = -WARM_UP_ROUNDS; round < rounds; round++) {
                 for (int k = 0; k < variants; k++) {
                     int variant = (k + Math.max(round, 0)) % variants; // rotate the order from round to round
                     long start = System.nanoTime();

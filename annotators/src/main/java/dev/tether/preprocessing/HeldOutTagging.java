@@ -2,8 +2,6 @@ package dev.tether.preprocessing;
 
 import dev.tether.treebank.TreebankSentence;
 import opennlp.tools.postag.POSModel;
-import opennlp.tools.postag.POSTagFormat;
-import opennlp.tools.postag.POSTaggerME;
 
 import java.io.IOException;
 import java.util.ArrayList;
@@ -57,7 +55,7 @@ public final class HeldOutTagging {
                         + "tag for every word, so no held-out tagger can be trained; give a larger treebank or train with --no-tagger");
             }
             POSModel model = PosModelBytes.unpack(trainer.train());
-            POSTaggerME tagger = new POSTaggerME(model, POSTagFormat.PENN);
+            MemoizedBeamTagger tagger = new MemoizedBeamTagger(model);
             for (TreebankSentence s : sentences.subList(from, to)) out.add(s.withXposTags(tagger.tag(s.forms())));
         }
         return out;

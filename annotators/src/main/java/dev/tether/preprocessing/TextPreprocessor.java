@@ -1,6 +1,7 @@
 package dev.tether.preprocessing;
 
 import java.io.IOException;
+import java.util.function.UnaryOperator;
 
 import org.apache.uima.UimaContext;
 import org.apache.uima.analysis_engine.AnalysisEngineProcessException;
@@ -78,6 +79,14 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_MODEL, mandatory = false, defaultValue = LoadedModels.DEFAULT)
     private String modelLocation;
 
+    /**
+     * Tag with OpenNLP's own {@code POSTaggerME} instead of {@link MemoizedBeamTagger}, which gives the same tags at
+     * less cost; for comparison, and used anyway for a part-of-speech model that is not a maximum entropy model.
+     */
+    public static final String PARAM_LIBRARY_TAGGER = "libraryTagger";
+    @ConfigurationParameter(name = PARAM_LIBRARY_TAGGER, mandatory = true, defaultValue = "false")
+    private boolean libraryTagger;
+
     /** Key of the optional shared model resource ({@link ModelHolder}), the same one the resolver binds. */
     public static final String RES_MODEL = "sharedModel";
     @ExternalResource(key = RES_MODEL, mandatory = false)
@@ -85,7 +94,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
 
     private SentenceDetectorME sentenceDetector;
     private TokenizerME tokenizer;
-    private POSTaggerME tagger;
+    private UnaryOperator<String[]> tagger;
     private ChunkerME chunker;
 
     private long documents;
@@ -120,9 +129,14 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         }
         sentenceDetector = new SentenceDetectorME(models.sentenceModel());
         tokenizer = new TokenizerME(models.tokenizerModel());
-        // PENN: keep the model's own Penn Treebank tags. The default maps them to Universal Dependencies tags, which
-        // the 1.5 chunker model was not trained on.
-        tagger = new POSTaggerME(posModel, POSTagFormat.PENN);
+        // The model's own Penn Treebank tags, as OpenNLP's POSTaggerME gives them with POSTagFormat.PENN (its default
+        // maps them to Universal Dependencies tags, which the 1.5 chunker model was not trained on), decoded at less cost.
+        if (libraryTagger || !MemoizedBeamTagger.decodes(posModel)) {
+            POSTaggerME library = new POSTaggerME(posModel, POSTagFormat.PENN);
+            tagger = library::tag;
+        } else {
+            tagger = new MemoizedBeamTagger(posModel)::tag;
+        }
         chunker = chunk ? new ChunkerME(models.chunkerModel()) : null;
     }
 
@@ -163,7 +177,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         for (int i = 0; i < n; i++) {
             words[i] = tokens[start + i].getCoveredText(sentenceText).toString();
         }
-        String[] tags = tagger.tag(words);
+        String[] tags = tagger.apply(words);
         for (int i = 0; i < n; i++) {
             Span span = tokens[start + i];
             Token token = new Token(jcas, offset + span.getStart(), offset + span.getEnd());

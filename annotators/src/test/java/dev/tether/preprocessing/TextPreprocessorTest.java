@@ -92,6 +92,25 @@ class TextPreprocessorTest {
     }
 
     @Test
+    void theLibrarysTaggerAndTethersDecoderWriteTheSameTags() throws Exception {
+        // The word-for-word check over UD English EWT is MemoizedBeamTaggerEwtTest (test-corpora); this one checks
+        // that the parameter picks the decoder and that both write the same CAS.
+        String text = "The engineer replaced the gasket on the port engine with a spare from the stores. "
+                + "Seals and bearings on the bow thruster were worn, so the crew ordered new ones before the crossing.";
+        List<String> byTether = tagged(createEngine(TextPreprocessor.class), text);
+        List<String> byLibrary = tagged(createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_LIBRARY_TAGGER, true), text);
+        assertEquals(byLibrary, byTether);
+        assertTrue(byTether.contains("gasket/NN") && byTether.contains("replaced/VBD"), byTether.toString());
+    }
+
+    private static List<String> tagged(AnalysisEngine engine, String text) throws Exception {
+        JCas jcas = engine.newJCas();
+        jcas.setDocumentText(text);
+        engine.process(jcas);
+        return JCasUtil.select(jcas, Token.class).stream().map(t -> t.getCoveredText() + "/" + t.getPos()).toList();
+    }
+
+    @Test
     void emptyAndBlankDocumentsProduceNothing() throws Exception {
         AnalysisEngine preprocessor = createEngine(TextPreprocessor.class);
         for (String text : new String[] {"", " \n\t  \n"}) {
