@@ -102,8 +102,8 @@ public class RawCountingScaleOut {
     }
 
     private RawTextAttachmentCounting.Summary countOnSpark() throws IOException {
-        job.checkExecutors(List.of(work), null, null, null); // part of every run on Spark, so part of the shot
-        return job.countRawText(List.of(work));
+        job.checkExecutors(List.of(work.toString()), null, null, null); // part of every run on Spark, so part of the shot
+        return job.countRawText(List.of(work.toString()));
     }
 
     @TearDown(Level.Trial)

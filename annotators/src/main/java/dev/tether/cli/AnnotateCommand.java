@@ -121,7 +121,7 @@ final class AnnotateCommand implements Command {
         } else {
             SparkLibraries.require();
             try (SparkJob job = SparkJob.start(spark, "tether annotate")) {
-                job.checkExecutors(List.of(in), model, loaded.id(), outDir); // before any output, like the checks above
+                job.checkExecutors(List.of(in.toString()), model, loaded.id(), outDir); // before any output, like the checks above
                 OutputFolder.prepare(outDir);
                 Files.deleteIfExists(outDir.resolve(SUMMARY));
                 settings = new CollectionRun.Settings(model, loaded.id(), chunks, job.parallelism(), a.has("fresh"),

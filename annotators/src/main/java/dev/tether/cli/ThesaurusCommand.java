@@ -152,7 +152,12 @@ final class ThesaurusCommand implements Command {
         int threads = integer(a, "threads", Runtime.getRuntime().availableProcessors());
         if (threads < 1) throw new UsageException("--threads must be at least 1");
         List<Path> inputs = new ArrayList<>();
-        for (String r : a.values("raw")) inputs.add(Path.of(r));
+        if (spark == null) {
+            for (String r : a.values("raw")) {
+                DocumentFiles.requireLocal(r, "--raw");
+                inputs.add(Path.of(r));
+            }
+        }
 
         long start = System.nanoTime();
         ContextCounter counter = new ContextCounter();
@@ -162,13 +167,16 @@ final class ThesaurusCommand implements Command {
             counted = new RawTextCounting(threads).count(inputs, counter);
             where = threads + " threads";
         } else {
-            for (Path p : inputs) {
-                if (!java.nio.file.Files.exists(p)) throw new IOException(p + " does not exist; give raw text files or folders of .txt files");
+            List<String> locations = a.values("raw");
+            for (String r : locations) {
+                if (!DocumentFiles.isFileSystemUri(r) && !java.nio.file.Files.exists(Path.of(r))) {
+                    throw new IOException(r + " does not exist; give raw text files or folders of .txt files");
+                }
             }
             SparkLibraries.require();
             try (SparkJob job = SparkJob.start(spark, "tether thesaurus build")) {
-                job.checkExecutors(inputs, null, null, null);
-                counted = job.countContexts(inputs, counter);
+                job.checkExecutors(locations, null, null, null);
+                counted = job.countContexts(locations, counter);
                 where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
             }
         }

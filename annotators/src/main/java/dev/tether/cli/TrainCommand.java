@@ -19,6 +19,7 @@ import dev.tether.model.TaggerSection;
 import dev.tether.model.TetherModel;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.similarity.ThesaurusFile;
+import dev.tether.pipeline.DocumentFiles;
 import dev.tether.preprocessing.HeldOutTagging;
 import dev.tether.preprocessing.TreebankTaggerTrainer;
 import dev.tether.spark.SparkJob;
@@ -131,6 +132,13 @@ final class TrainCommand implements Command {
             if (a.has("raw")) {
                 List<Path> inputs = new ArrayList<>();
                 for (String f : a.values("raw")) {
+                    if (spark == null) DocumentFiles.requireLocal(f, "--raw");
+                    if (DocumentFiles.isFileSystemUri(f)) {
+                        // Listed on Spark; named like a local folder, by its last part.
+                        String trimmed = f.replaceAll("/+$", "");
+                        names.add(trimmed.substring(trimmed.lastIndexOf('/') + 1));
+                        continue;
+                    }
                     Path p = Path.of(f);
                     if (!Files.exists(p)) throw new IOException(p + " does not exist; give raw text files or folders of .txt files");
                     inputs.add(p);
@@ -144,8 +152,8 @@ final class TrainCommand implements Command {
                 } else {
                     SparkLibraries.require();
                     try (SparkJob job = SparkJob.start(spark, "tether train")) {
-                        job.checkExecutors(inputs, null, null, null);
-                        summary = job.countRawText(inputs);
+                        job.checkExecutors(a.values("raw"), null, null, null);
+                        summary = job.countRawText(a.values("raw"));
                         where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
                     }
                 }

@@ -124,7 +124,11 @@ public final class RawTextAttachmentCounting {
      * the skip (its {@link RawTextCounting.Skip} name and the reason naming the file).
      */
     public static String[] process(AnalysisEngine engine, JCas jcas, Path file) {
-        RawTextCounting.Reading r = RawTextCounting.read(file);
+        return process(engine, jcas, file.toString(), RawTextCounting.read(file));
+    }
+
+    /** The same for what {@code r} read of {@code file} (a path or a file system URI) elsewhere. */
+    public static String[] process(AnalysisEngine engine, JCas jcas, String file, RawTextCounting.Reading r) {
         if (r.skip() != null) return new String[] {r.skip().name(), r.reason()};
         jcas.reset();
         jcas.setDocumentLanguage("en");

@@ -69,6 +69,30 @@ public final class DocumentFiles {
         }
     }
 
+    /**
+     * Whether {@code input} names its documents by a file system URI ({@code hdfs://…}, {@code s3a://…},
+     * {@code file:///…}: a scheme of two or more letters and a colon) rather than by a local path; only runs on
+     * Spark read those.
+     */
+    public static boolean isFileSystemUri(String input) {
+        int colon = input.indexOf(':');
+        if (colon < 2) return false;
+        for (int i = 0; i < colon; i++) {
+            char c = input.charAt(i);
+            boolean letter = (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z');
+            if (!(letter || (i > 0 && ((c >= '0' && c <= '9') || c == '+' || c == '.' || c == '-')))) return false;
+        }
+        return true;
+    }
+
+    /** Refuses a file system URI where only local paths are read (a run on threads), saying what to do. */
+    public static void requireLocal(String input, String option) throws IOException {
+        if (isFileSystemUri(input)) {
+            throw new IOException(option + " " + input + ": a file system URI is read only on Spark; add --spark MASTER, or"
+                    + " give a local path");
+        }
+    }
+
     public static Listing list(Path input) throws IOException {
         if (!Files.exists(input)) {
             throw new NoSuchFileException(input.toString(), null, "does not exist; give a text file or a folder of them");

@@ -157,6 +157,14 @@ public final class RawTextCounting {
         } catch (IOException e) {
             return new Reading(null, Skip.UNREADABLE, file + ": cannot be read (" + e.getMessage() + "); check its permissions");
         }
+        return check(file.toString(), bytes);
+    }
+
+    /**
+     * The text of a raw text file read elsewhere ({@code file} names it: a path or a file system URI), or why it is
+     * skipped, by the same rules as {@link #read(Path)}.
+     */
+    public static Reading check(String file, byte[] bytes) {
         for (byte b : bytes) {
             if (b == 0) return new Reading(null, Skip.BINARY, file + ": holds NUL bytes, a binary file; give plain UTF-8 text, or move it out of the input");
         }
@@ -172,14 +180,17 @@ public final class RawTextCounting {
     }
 
     /** One document: tagged, or skipped with a reason that names the file. */
-    public record Document(Path file, RawTextTagger.TaggedText text, Skip skip, String reason) {
+    public record Document(String file, RawTextTagger.TaggedText text, Skip skip, String reason) {
         /** Reads and tags {@code file} with {@code tagger}, or says why it is skipped. */
         public static Document of(Path file, RawTextTagger tagger) {
-            Reading r = read(file);
-            if (r.skip() != null) return new Document(file, null, r.skip(), r.reason());
-            String text = r.text();
+            return of(file.toString(), read(file), tagger);
+        }
+
+        /** Tags what {@code reading} read of {@code file} with {@code tagger}, or says why it is skipped. */
+        public static Document of(String file, Reading reading, RawTextTagger tagger) {
+            if (reading.skip() != null) return new Document(file, null, reading.skip(), reading.reason());
             try {
-                return new Document(file, tagger.tag(text), null, null);
+                return new Document(file, tagger.tag(reading.text()), null, null);
             } catch (AnalysisEngineProcessException | RuntimeException e) {
                 return new Document(file, null, Skip.UNREADABLE, file + ": preprocessing failed (" + e.getMessage() + ")");
             }

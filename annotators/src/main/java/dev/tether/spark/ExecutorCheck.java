@@ -28,6 +28,14 @@ record ExecutorCheck(List<String> inputs, String model, String modelId, String o
         }
         List<String> problems = new ArrayList<>();
         for (String input : inputs) {
+            if (InputLocations.isUri(input)) {
+                String why = InputLocations.problem(input);
+                if (why != null) {
+                    problems.add("executor on " + host + ": the input " + input + " " + why + "; check that every executor"
+                            + " reaches that file system (its Hadoop configuration, HADOOP_CONF_DIR) and may read the input");
+                }
+                continue;
+            }
             Path p = Path.of(input);
             if (!Files.exists(p)) {
                 problems.add("executor on " + host + ": the input " + input + " does not exist there; put the input on a"

@@ -5,7 +5,6 @@ import dev.tether.similarity.RawTextCounting;
 import dev.tether.similarity.RawTextTagger;
 import org.apache.spark.api.java.function.Function2;
 
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
@@ -31,7 +30,7 @@ final class PartitionContextCounting implements Function2<Integer, Iterator<Arra
         try {
             while (files.hasNext()) {
                 for (String file : files.next()) {
-                    RawTextCounting.Document d = RawTextCounting.Document.of(Path.of(file), tagger);
+                    RawTextCounting.Document d = RawTextCounting.Document.of(file, InputLocations.read(file), tagger);
                     if (d.skip() != null) {
                         skipped.add(new String[] {d.skip().name(), d.reason()});
                         continue;

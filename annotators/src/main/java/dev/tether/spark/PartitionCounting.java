@@ -11,7 +11,6 @@ import org.apache.uima.util.CasCreationUtils;
 
 import java.io.IOException;
 import java.io.Serializable;
-import java.nio.file.Path;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Queue;
@@ -58,7 +57,7 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
         try {
             int counted = 0;
             for (String file : files) {
-                String[] skip = RawTextAttachmentCounting.process(flow.engine(), flow.jcas(), Path.of(file));
+                String[] skip = RawTextAttachmentCounting.process(flow.engine(), flow.jcas(), file, InputLocations.read(file));
                 if (skip != null) {
                     shard.skip(skip);
                 } else {

@@ -3,7 +3,6 @@ package dev.tether.spark;
 import dev.tether.counts.RawAttachmentCountsBuilder;
 import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.pipeline.CollectionRun;
-import dev.tether.pipeline.DocumentFiles;
 import dev.tether.pipeline.DocumentTask;
 import dev.tether.similarity.ContextCounter;
 import dev.tether.similarity.RawTextCounting;
@@ -97,9 +96,9 @@ public final class SparkJob implements AutoCloseable {
      * or output folder an executor cannot use), or when no executor takes a task within
      * {@value #STARTUP_DEADLINE_SECONDS} s.
      */
-    public void checkExecutors(List<Path> inputs, String model, String modelId, Path out) throws IOException {
+    public void checkExecutors(List<String> inputs, String model, String modelId, Path out) throws IOException {
         List<String> in = new ArrayList<>();
-        for (Path p : inputs) in.add(p.toAbsolutePath().toString());
+        for (String p : inputs) in.add(InputLocations.isUri(p) ? p : Path.of(p).toAbsolutePath().toString());
         ExecutorCheck check = new ExecutorCheck(List.copyOf(in), model, modelId, out == null ? null : out.toAbsolutePath().toString());
         int slots = Math.max(2, parallelism());
         List<Integer> probes = IntStream.range(0, slots).boxed().toList();
@@ -146,21 +145,23 @@ public final class SparkJob implements AutoCloseable {
     }
 
     /**
-     * Counts the raw text below {@code inputs} for {@code train --raw} as {@link RawTextAttachmentCounting#count} does
-     * on threads, with the same result: each partition's documents are counted into one shard of Tether's mergeable
-     * count tables, and the shards are combined by Spark's tree aggregation (results of completed tasks only).
+     * Counts the raw text below {@code inputs} (local paths or file system URIs, see {@link InputLocations}) for
+     * {@code train --raw} as {@link RawTextAttachmentCounting#count} does on threads, with the same result: each
+     * partition's documents are counted into one shard of Tether's mergeable count tables, and the shards are combined
+     * by Spark's tree aggregation (results of completed tasks only).
      */
-    public RawTextAttachmentCounting.Summary countRawText(List<Path> inputs) throws IOException {
+    public RawTextAttachmentCounting.Summary countRawText(List<String> inputs) throws IOException {
         return countRawText(inputs, null);
     }
 
-    RawTextAttachmentCounting.Summary countRawText(List<Path> inputs, PartitionCounting.AfterDocument afterDocument)
+    RawTextAttachmentCounting.Summary countRawText(List<String> inputs, PartitionCounting.AfterDocument afterDocument)
             throws IOException {
         long start = System.nanoTime();
-        Documents listed = Documents.below(inputs);
+        InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
         long notDocuments = listed.notDocuments();
-        List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
+        Map<String, Long> sizes = sizes(listed);
+        List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), sizes::get);
         CountShard all;
         try {
             all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(afterDocument))
@@ -186,12 +187,13 @@ public final class SparkJob implements AutoCloseable {
      * run reads them, are cut into consecutive partitions; each task tags and counts its partition into a counter of
      * its own; the driver appends the completed tasks' counters in partition order.
      */
-    public RawTextCounting.Summary countContexts(List<Path> inputs, ContextCounter into) throws IOException {
+    public RawTextCounting.Summary countContexts(List<String> inputs, ContextCounter into) throws IOException {
         long start = System.nanoTime();
-        Documents listed = Documents.below(inputs);
+        InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
         long notDocuments = listed.notDocuments();
-        List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), f -> new File(f).length());
+        Map<String, Long> sizes = sizes(listed);
+        List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), sizes::get);
         List<ContextShard> shards;
         try {
             shards = new ArrayList<>(context.parallelize(parts, Math.max(1, parts.size()))
@@ -215,18 +217,11 @@ public final class SparkJob implements AutoCloseable {
                 (System.nanoTime() - start) / 1e9);
     }
 
-    /** The documents below the inputs, in the order a run on threads reads them, and the entries that are not documents. */
-    private record Documents(List<String> files, long notDocuments) {
-        static Documents below(List<Path> inputs) throws IOException {
-            List<String> files = new ArrayList<>();
-            long notDocuments = 0;
-            for (Path p : inputs) {
-                DocumentFiles.Listing listing = DocumentFiles.list(p);
-                for (Path d : listing.documents()) files.add(d.toString());
-                notDocuments += listing.skippedTotal();
-            }
-            return new Documents(files, notDocuments);
-        }
+    /** Each listed document's size in bytes, which the partitions balance. */
+    private static Map<String, Long> sizes(InputLocations.Documents listed) {
+        Map<String, Long> sizes = new java.util.HashMap<>();
+        for (int i = 0; i < listed.files().size(); i++) sizes.put(listed.files().get(i), listed.sizes().get(i));
+        return sizes;
     }
 
     /** Stops the context this job started (not a lent one). */

@@ -148,6 +148,55 @@ class CommandsOnSparkTest {
     }
 
     @Test
+    void aFileSystemUriIsListedAndReadThroughHadoopAsItsLocalPathIs() throws Exception {
+        // A file: URI goes through Hadoop's FileSystem API, as hdfs:// or s3a:// would; the listing rules (a
+        // subfolder, a hidden file, another extension) and the bytes written are those of the local path on threads.
+        Path raw = writeRawText();
+        Files.writeString(Files.createDirectory(raw.resolve("night-shift")).resolve("shift-50.TXT"), LOGS.get(0));
+        Files.writeString(raw.resolve(".draft.txt"), LOGS.get(1));
+        Files.writeString(raw.resolve("rota.csv"), "deckhand,engineer\n");
+        String uri = raw.toUri().toString();
+        assertTrue(uri.startsWith("file:/"), uri);
+
+        Path onThreads = dir.resolve("threads.tether");
+        Path onSpark = dir.resolve("spark.tether");
+        CommandLineRun a = CommandLineRun.of("train", "--raw", raw.toString(), "--out", onThreads.toString(), "--threads", "2");
+        CommandLineRun b = CommandLineRun.of("train", "--raw", uri, "--out", onSpark.toString(), "--spark", "local[2]");
+        assertEquals(Tether.SOME_FAILED, b.exitCode(), b::toString);
+        assertTrue(b.out().contains("raw text: 25 documents") && b.out().contains("2 entries that are not documents"), b::toString);
+        assertTrue(b.out().contains(uri + "shift-99.txt: holds NUL bytes"), "the skipped document is named by its URI: " + b);
+        assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark), a + "\n" + b);
+
+        Path thesaurusOnThreads = dir.resolve("threads.thesaurus");
+        Path thesaurusOnSpark = dir.resolve("spark.thesaurus");
+        CommandLineRun c = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out", thesaurusOnThreads.toString(),
+                "--min-frequency", "2", "--threads", "2");
+        CommandLineRun d = CommandLineRun.of("thesaurus", "build", "--raw", uri, "--out", thesaurusOnSpark.toString(),
+                "--min-frequency", "2", "--spark", "local[2]");
+        assertEquals(Tether.SOME_FAILED, d.exitCode(), d::toString);
+        assertArrayEquals(Files.readAllBytes(thesaurusOnThreads), Files.readAllBytes(thesaurusOnSpark), c + "\n" + d);
+    }
+
+    @Test
+    void aFileSystemUriWithoutSparkOrThatDoesNotExistIsAnErrorBeforeAnyOutput() throws Exception {
+        Path raw = writeRawText();
+        Path model = dir.resolve("m.tether");
+        CommandLineRun local = CommandLineRun.of("train", "--raw", raw.toUri().toString(), "--out", model.toString());
+        assertEquals(Tether.INPUT, local.exitCode(), local::toString);
+        assertTrue(local.err().contains("only on Spark") && local.err().contains("--spark"), local::toString);
+        CommandLineRun thesaurus = CommandLineRun.of("thesaurus", "build", "--raw", raw.toUri().toString(), "--out",
+                dir.resolve("t.thesaurus").toString());
+        assertEquals(Tether.INPUT, thesaurus.exitCode(), thesaurus::toString);
+
+        String missing = dir.resolve("no-such-logs").toUri().toString();
+        CommandLineRun gone = CommandLineRun.of("train", "--raw", missing, "--out", model.toString(), "--spark", "local[2]");
+        assertEquals(Tether.INPUT, gone.exitCode(), gone::toString);
+        assertTrue(gone.err().contains(missing) && gone.err().contains("does not exist"), gone::toString);
+        assertFalse(Files.exists(model));
+        assertFalse(Files.exists(dir.resolve("t.thesaurus")));
+    }
+
+    @Test
     void trainOnSparkMixedWithLabelledSourcesWritesTheSameModel() throws Exception {
         Path raw = writeRawText();
         Path quadruples = FerryLogs.write(dir, "training.txt", FerryLogs.TRAINING);

@@ -131,9 +131,9 @@ class SparkJobTest {
         INJECTED.set(0);
         int before = PartitionCounting.built();
         try (SparkJob job = SparkJob.start(SparkMaster.parse("local[2]"), "test")) {
-            clean = job.countRawText(List.of(in));
+            clean = job.countRawText(List.of(in.toString()));
             // Partition 0's first attempt dies after counting its first document: its counts must not survive.
-            faulty = job.countRawText(List.of(in), (partition, attempt, counted) -> {
+            faulty = job.countRawText(List.of(in.toString()), (partition, attempt, counted) -> {
                 if (partition == 0 && attempt == 0 && counted == 1) {
                     INJECTED.incrementAndGet();
                     throw new IOException("injected fault: the executor is lost");
@@ -164,13 +164,13 @@ class SparkJobTest {
         Path missing = dir.resolve("models/retrained.tether");
         try (SparkJob job = SparkJob.start(SparkMaster.parse("local[2]"), "test")) {
             IOException e = assertThrows(IOException.class,
-                    () -> job.checkExecutors(List.of(in), missing.toString(), "0123", dir.resolve("out")));
+                    () -> job.checkExecutors(List.of(in.toString()), missing.toString(), "0123", dir.resolve("out")));
             assertTrue(e.getMessage().contains("cannot read the model " + missing), e.getMessage());
             assertTrue(e.getMessage().contains("spark-submit --files"), e.getMessage());
             Files.createDirectories(missing.getParent());
             Files.writeString(missing, "not a model\n");
             IOException damaged = assertThrows(IOException.class,
-                    () -> job.checkExecutors(List.of(in), missing.toString(), "0123", dir.resolve("out")));
+                    () -> job.checkExecutors(List.of(in.toString()), missing.toString(), "0123", dir.resolve("out")));
             assertTrue(damaged.getMessage().contains("cannot read the model " + missing), damaged.getMessage());
         }
     }
@@ -181,9 +181,9 @@ class SparkJobTest {
         String id = LoadedModels.get(LoadedModels.DEFAULT).id();
         try (SparkJob job = SparkJob.start(SparkMaster.parse("local[2]"), "test")) {
             IOException e = assertThrows(IOException.class,
-                    () -> job.checkExecutors(List.of(gone), LoadedModels.DEFAULT, id, dir.resolve("out")));
+                    () -> job.checkExecutors(List.of(gone.toString()), LoadedModels.DEFAULT, id, dir.resolve("out")));
             assertTrue(e.getMessage().contains("the input " + gone + " does not exist there"), e.getMessage());
-            job.checkExecutors(List.of(in), LoadedModels.DEFAULT, id, dir.resolve("out")); // and all is well otherwise
+            job.checkExecutors(List.of(in.toString()), LoadedModels.DEFAULT, id, dir.resolve("out")); // and all is well otherwise
         }
     }
 }

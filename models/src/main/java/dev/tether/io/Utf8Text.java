@@ -14,6 +14,11 @@ public final class Utf8Text {
 
     /** The text of {@code bytes}, read from {@code file}; invalid UTF-8 fails with the file and line. */
     public static String decode(Path file, byte[] bytes) throws InputFormatException {
+        return decode(file.toString(), bytes);
+    }
+
+    /** The same for an input named by {@code file} (a local path or a file system URI). */
+    public static String decode(String file, byte[] bytes) throws InputFormatException {
         CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
                 .onMalformedInput(CodingErrorAction.REPORT)
                 .onUnmappableCharacter(CodingErrorAction.REPORT);

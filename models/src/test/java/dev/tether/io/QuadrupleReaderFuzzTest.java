@@ -67,7 +67,7 @@ class QuadrupleReaderFuzzTest {
     }
 
     private static void assertNamesFileAndLine(InputFormatException e, Path file, int lines) {
-        assertEquals(file, e.file());
+        assertEquals(file.toString(), e.file());
         assertTrue(e.getMessage().startsWith(file.toString()), e.getMessage());
         assertTrue(e.line() >= 0 && e.line() <= lines, "line " + e.line() + " of " + lines + ": " + e.getMessage());
         if (e.line() > 0) assertTrue(e.getMessage().startsWith(file + ":" + e.line() + ": "), e.getMessage());
