@@ -7,7 +7,6 @@ import dev.tether.vocabulary.PennTags;
 import dev.tether.vocabulary.Vocabulary;
 import dev.tether.vocabulary.WordNormalizer;
 import gnu.trove.map.hash.TIntDoubleHashMap;
-import gnu.trove.set.hash.TLongHashSet;
 
 import java.util.EnumSet;
 import java.util.Set;
@@ -380,20 +379,35 @@ public final class CoordinationFeatureExtractor {
 
     /** Share of the left conjunct's tag bigrams that the right conjunct has too (Dice over bigram sets). */
     static double tagOverlap(String[] t, int lb, int le, int rb, int re) {
-        TLongHashSet left = bigrams(t, lb, le);
-        TLongHashSet right = bigrams(t, rb, re);
-        if (left.isEmpty() && right.isEmpty()) return t[lb].equals(t[rb]) ? 1 : 0;
+        long[] left = bigrams(t, lb, le);
+        long[] right = bigrams(t, rb, re);
+        if (left.length == 0 && right.length == 0) return t[lb].equals(t[rb]) ? 1 : 0;
         int common = 0;
-        for (long b : left.toArray()) if (right.contains(b)) common++;
-        return 2.0 * common / (left.size() + right.size());
+        for (int i = 0, j = 0; i < left.length && j < right.length; ) {
+            if (left[i] == right[j]) {
+                common++;
+                i++;
+                j++;
+            } else if (left[i] < right[j]) {
+                i++;
+            } else {
+                j++;
+            }
+        }
+        return 2.0 * common / (left.length + right.length);
     }
 
-    private static TLongHashSet bigrams(String[] t, int from, int to) {
-        TLongHashSet s = new TLongHashSet();
-        for (int k = Math.max(0, from); k < Math.min(to, t.length - 1) && k - from < 20; k++) {
-            s.add((long) PennTags.id(t[k]) << 32 | PennTags.id(t[k + 1]));
-        }
-        return s;
+    /** The distinct tag bigrams of tokens {@code from..to} (at most 20 counted), sorted. */
+    private static long[] bigrams(String[] t, int from, int to) {
+        int start = Math.max(0, from);
+        int end = Math.min(Math.min(to, t.length - 1), from + 20);
+        if (end <= start) return new long[0];
+        long[] b = new long[end - start];
+        for (int k = start; k < end; k++) b[k - start] = (long) PennTags.id(t[k]) << 32 | PennTags.id(t[k + 1]);
+        java.util.Arrays.sort(b);
+        int distinct = 1;
+        for (int k = 1; k < b.length; k++) if (b[k] != b[distinct - 1]) b[distinct++] = b[k];
+        return distinct == b.length ? b : java.util.Arrays.copyOf(b, distinct);
     }
 
     static int distanceBucket(int d) {
