@@ -28,6 +28,11 @@ final class InputLocations {
     private InputLocations() {
     }
 
+    /** The Hadoop configuration this process finds, read once (building one parses its XML resources). */
+    private static final class ExecutorConfiguration {
+        static final Configuration CONF = new Configuration();
+    }
+
     /** Whether {@code input} is a file system URI rather than a local path. */
     static boolean isUri(String input) {
         return DocumentFiles.isFileSystemUri(input);
@@ -97,7 +102,7 @@ final class InputLocations {
         if (!isUri(file)) return RawTextCounting.read(Path.of(file));
         org.apache.hadoop.fs.Path path = new org.apache.hadoop.fs.Path(URI.create(file));
         byte[] bytes;
-        try (FSDataInputStream in = path.getFileSystem(new Configuration()).open(path)) {
+        try (FSDataInputStream in = path.getFileSystem(ExecutorConfiguration.CONF).open(path)) {
             bytes = in.readAllBytes();
         } catch (IOException e) {
             return new RawTextCounting.Reading(null, RawTextCounting.Skip.UNREADABLE, file + ": cannot be read ("
@@ -111,7 +116,7 @@ final class InputLocations {
         if (!isUri(input)) return null;
         try {
             org.apache.hadoop.fs.Path path = new org.apache.hadoop.fs.Path(URI.create(input));
-            if (!path.getFileSystem(new Configuration()).exists(path)) return "does not exist there";
+            if (!path.getFileSystem(ExecutorConfiguration.CONF).exists(path)) return "does not exist there";
             return null;
         } catch (IOException | RuntimeException e) {
             return "cannot be reached there (" + e.getMessage() + ")";
