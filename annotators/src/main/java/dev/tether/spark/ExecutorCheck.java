@@ -3,6 +3,7 @@ package dev.tether.spark;
 import dev.tether.model.LoadedModels;
 import dev.tether.output.AtomicFile;
 import dev.tether.output.IoFailure;
+import dev.tether.pipeline.DocumentFiles;
 
 import java.io.IOException;
 import java.io.Serializable;
@@ -28,7 +29,7 @@ record ExecutorCheck(List<String> inputs, String model, String modelId, String o
         }
         List<String> problems = new ArrayList<>();
         for (String input : inputs) {
-            if (InputLocations.isUri(input)) {
+            if (DocumentFiles.isFileSystemUri(input)) {
                 String why = InputLocations.problem(input);
                 if (why != null) {
                     problems.add("executor on " + host + ": the input " + input + " " + why + "; check that every executor"

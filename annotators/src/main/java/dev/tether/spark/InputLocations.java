@@ -13,8 +13,10 @@ import java.net.URI;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * The raw-text inputs of a Spark job: a local path (a folder every executor sees at the same place, read as the run
@@ -33,26 +35,21 @@ final class InputLocations {
         static final Configuration CONF = new Configuration();
     }
 
-    /** Whether {@code input} is a file system URI rather than a local path. */
-    static boolean isUri(String input) {
-        return DocumentFiles.isFileSystemUri(input);
-    }
-
     /** The documents below the inputs, in the order a run on threads reads them, their sizes, and the skipped entries. */
-    record Documents(List<String> files, List<Long> sizes, long notDocuments) {
+    record Documents(List<String> files, Map<String, Long> sizes, long notDocuments) {
     }
 
     /** Lists the inputs on the driver; {@code conf} is the Spark context's Hadoop configuration. */
     static Documents list(List<String> inputs, Configuration conf) throws IOException {
         List<String> files = new ArrayList<>();
-        List<Long> sizes = new ArrayList<>();
+        Map<String, Long> sizes = new HashMap<>();
         long notDocuments = 0;
         for (String input : inputs) {
-            if (!isUri(input)) {
+            if (!DocumentFiles.isFileSystemUri(input)) {
                 DocumentFiles.Listing listing = DocumentFiles.list(Path.of(input));
                 for (Path d : listing.documents()) {
                     files.add(d.toString());
-                    sizes.add(d.toFile().length());
+                    sizes.put(d.toString(), d.toFile().length());
                 }
                 notDocuments += listing.skippedTotal();
                 continue;
@@ -61,7 +58,7 @@ final class InputLocations {
             FileSystem fs = root.getFileSystem(conf);
             FileStatus status;
             try {
-                status = fs.getFileLinkStatus(root);
+                status = fs.getFileStatus(root); // a linked input is followed, as a local one is
             } catch (FileNotFoundException e) {
                 throw new IOException(input + " does not exist; give raw text files or folders of .txt files", e);
             }
@@ -71,7 +68,7 @@ final class InputLocations {
             documents.sort(Comparator.comparing(d -> d.getPath().toUri().getPath()));
             for (FileStatus d : documents) {
                 files.add(d.getPath().toUri().toString());
-                sizes.add(d.getLen());
+                sizes.put(d.getPath().toUri().toString(), d.getLen());
             }
         }
         return new Documents(files, sizes, notDocuments);
@@ -99,7 +96,7 @@ final class InputLocations {
 
     /** Reads one listed document on an executor, or says why it is skipped (a reason naming it). */
     static RawTextCounting.Reading read(String file) {
-        if (!isUri(file)) return RawTextCounting.read(Path.of(file));
+        if (!DocumentFiles.isFileSystemUri(file)) return RawTextCounting.read(Path.of(file));
         org.apache.hadoop.fs.Path path = new org.apache.hadoop.fs.Path(URI.create(file));
         byte[] bytes;
         try (FSDataInputStream in = path.getFileSystem(ExecutorConfiguration.CONF).open(path)) {
@@ -111,9 +108,8 @@ final class InputLocations {
         return RawTextCounting.check(file, bytes);
     }
 
-    /** Why an executor cannot use {@code input}, or null. */
+    /** Why an executor cannot use the file system URI {@code input}, or null. */
     static String problem(String input) {
-        if (!isUri(input)) return null;
         try {
             org.apache.hadoop.fs.Path path = new org.apache.hadoop.fs.Path(URI.create(input));
             if (!path.getFileSystem(ExecutorConfiguration.CONF).exists(path)) return "does not exist there";

@@ -3,6 +3,7 @@ package dev.tether.spark;
 import dev.tether.counts.RawAttachmentCountsBuilder;
 import dev.tether.counts.RawTextAttachmentCounting;
 import dev.tether.pipeline.CollectionRun;
+import dev.tether.pipeline.DocumentFiles;
 import dev.tether.pipeline.DocumentTask;
 import dev.tether.similarity.ContextCounter;
 import dev.tether.similarity.RawTextCounting;
@@ -98,7 +99,7 @@ public final class SparkJob implements AutoCloseable {
      */
     public void checkExecutors(List<String> inputs, String model, String modelId, Path out) throws IOException {
         List<String> in = new ArrayList<>();
-        for (String p : inputs) in.add(InputLocations.isUri(p) ? p : Path.of(p).toAbsolutePath().toString());
+        for (String p : inputs) in.add(DocumentFiles.isFileSystemUri(p) ? p : Path.of(p).toAbsolutePath().toString());
         ExecutorCheck check = new ExecutorCheck(List.copyOf(in), model, modelId, out == null ? null : out.toAbsolutePath().toString());
         int slots = Math.max(2, parallelism());
         List<Integer> probes = IntStream.range(0, slots).boxed().toList();
@@ -160,8 +161,7 @@ public final class SparkJob implements AutoCloseable {
         InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
         long notDocuments = listed.notDocuments();
-        Map<String, Long> sizes = sizes(listed);
-        List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), sizes::get);
+        List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), listed.sizes()::get);
         CountShard all;
         try {
             all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(afterDocument))
@@ -192,8 +192,7 @@ public final class SparkJob implements AutoCloseable {
         InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
         long notDocuments = listed.notDocuments();
-        Map<String, Long> sizes = sizes(listed);
-        List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), sizes::get);
+        List<ArrayList<String>> parts = BalancedPartitions.inOrder(files, PARTITIONS_PER_SLOT * parallelism(), listed.sizes()::get);
         List<ContextShard> shards;
         try {
             shards = new ArrayList<>(context.parallelize(parts, Math.max(1, parts.size()))
@@ -215,13 +214,6 @@ public final class SparkJob implements AutoCloseable {
         }
         return new RawTextCounting.Summary(documents, skipped, notDocuments, into.sentenceCount(), into.tokenCount(),
                 (System.nanoTime() - start) / 1e9);
-    }
-
-    /** Each listed document's size in bytes, which the partitions balance. */
-    private static Map<String, Long> sizes(InputLocations.Documents listed) {
-        Map<String, Long> sizes = new java.util.HashMap<>();
-        for (int i = 0; i < listed.files().size(); i++) sizes.put(listed.files().get(i), listed.sizes().get(i));
-        return sizes;
     }
 
     /** Stops the context this job started (not a lent one). */
