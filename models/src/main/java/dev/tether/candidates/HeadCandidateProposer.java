@@ -79,6 +79,18 @@ public final class HeadCandidateProposer {
     /** Prepositions that taggers read as particles or adverbs before a name or number ("closed on/RP Sunday"). */
     private static final String[] PREPOSITIONS_READ_AS_PARTICLES = {
             "on", "in", "at", "by", "for", "from", "with", "to", "into", "over", "through", "around", "after", "before", "since", "until"};
+    /** Prepositions, subordinators and coordinators that end like an inflected word ("during", "unless", "plus"). */
+    private static final String[] INFLECTED_FUNCTION_WORDS = {
+            "during", "unless", "across", "towards", "besides", "whereas", "versus", "plus", "minus", "less", "thus",
+            "times", "including", "regarding", "concerning", "considering", "following", "excluding", "according",
+            "pending", "barring", "notwithstanding", "provided", "afterwards", "upwards", "downwards", "backwards"};
+    /** Words that are prepositions whatever a tagger says. */
+    private static final String[] ONLY_PREPOSITIONS = {
+            "at", "of", "with", "from", "into", "onto", "upon", "during", "among", "towards", "toward", "via", "per"};
+    /** Nouns of time that stand alone as adverbials after a noun ("the meeting today at 10"), not inside its run. */
+    private static final String[] TIME_ADVERBIAL_NOUNS = {"today", "tonight", "tomorrow", "yesterday"};
+    /** Objects of a preposition that make its phrase part of a relative clause ("the office to which it is sent"). */
+    private static final String[] RELATIVE_OBJECTS = {"which", "whom"};
     private static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re"};
 
     // Word classes of Penn Treebank tags, as the rules above need them.
@@ -111,6 +123,7 @@ public final class HeadCandidateProposer {
         byte[] kinds = new byte[to - from];
         for (int i = from; i < to; i++) kinds[i - from] = kind(pennTags[i]);
         correctMisreadVerbs(words, pennTags, kinds, from);
+        correctClosedClassMisreads(words, pennTags, kinds, from);
         if (from == 0) correctOpeningVerb(words, pennTags, kinds);
         String[] windowWords = from == 0 && to == words.length ? words : java.util.Arrays.copyOfRange(words, from, to);
         PrepositionCandidates c = propose(windowWords, kinds, index - from);
@@ -174,12 +187,53 @@ public final class HeadCandidateProposer {
             boolean afterSubject = k > 0 && (kinds[k - 1] == NOUN || kinds[k - 1] == PROPER || kinds[k - 1] == PRONOUN);
             String next = k + 1 < kinds.length ? pennTags[k + 1 + offset] : "";
             boolean objectFollows = "DT".equals(next) || "PRP$".equals(next) || "CD".equals(next);
-            if (afterSubject && objectFollows) {
+            if (afterSubject && (objectFollows || punctuationTag)) {
                 kinds[k] = VERB;
             } else if (punctuationTag) {
                 kinds[k] = OTHER;
             }
         }
+    }
+
+    /**
+     * A tagger that meets an unknown word sometimes gives it a closed-class tag ("forces on Tuesday condemned/CC
+     * Sharon", "customers adds/IN entertainment"), and sometimes tags a preposition as a noun ("seeing the film at/NN
+     * the cinema"). A word of letters tagged {@code IN} or {@code CC} that ends like an inflected verb or a plural
+     * (-s, -ed, -ing) and is none of the few English prepositions and coordinators of that shape is read as a verb
+     * after a subject, "to" or a modal, or when it ends in "-ed", and as a noun otherwise; an interjection right
+     * after "to" or a modal is a verb ("to welcome/UH"); and a word that is only ever a preposition is one whatever
+     * its tag. (Measured on UD English EWT end to end with the EWT-trained tagger; see the class comment.)
+     */
+    private static void correctClosedClassMisreads(String[] words, String[] pennTags, byte[] kinds, int offset) {
+        for (int k = 0; k < kinds.length; k++) {
+            String tag = pennTags[k + offset];
+            String word = words[k + offset];
+            boolean prepositionTag = "IN".equals(tag) || "TO".equals(tag);
+            if (!prepositionTag && isOneOf(word, ONLY_PREPOSITIONS)) {
+                kinds[k] = PREPOSITION;
+                continue;
+            }
+            boolean closedTag = "IN".equals(tag) || "CC".equals(tag);
+            boolean interjection = "UH".equals(tag);
+            if (!(closedTag || interjection) || !isWordOfLetters(word)) continue;
+            byte previous = k > 0 ? kinds[k - 1] : OTHER;
+            boolean afterVerbMarker = previous == TO || previous == MODAL;
+            if (interjection) {
+                if (afterVerbMarker) kinds[k] = VERB;
+                continue;
+            }
+            if (!looksInflected(word) || isOneOf(word, INFLECTED_FUNCTION_WORDS)) continue;
+            boolean afterSubject = previous == NOUN || previous == PROPER || previous == PRONOUN;
+            boolean past = word.regionMatches(true, word.length() - 2, "ed", 0, 2);
+            kinds[k] = afterSubject || afterVerbMarker || past ? VERB : NOUN;
+        }
+    }
+
+    /** Whether a word longer than three letters ends in -s, -ed or -ing. */
+    private static boolean looksInflected(String w) {
+        int n = w.length();
+        return n > 3 && (w.regionMatches(true, n - 1, "s", 0, 1) || w.regionMatches(true, n - 2, "ed", 0, 2)
+                || w.regionMatches(true, n - 3, "ing", 0, 3));
     }
 
     private static boolean isWordOfLetters(String w) {
@@ -193,6 +247,7 @@ public final class HeadCandidateProposer {
         byte[] kinds = new byte[words.length];
         for (int i = 0; i < kinds.length; i++) kinds[i] = kind(pennTags[i]);
         correctMisreadVerbs(words, pennTags, kinds, 0);
+        correctClosedClassMisreads(words, pennTags, kinds, 0);
         correctOpeningVerb(words, pennTags, kinds);
         return kinds;
     }
@@ -209,20 +264,21 @@ public final class HeadCandidateProposer {
         int object = findObject(words, kinds, p);
         if (object < 0) return null;
 
-        int[] before = new int[MAX_PRECEDING];
-        HeadClass[] beforeClasses = new HeadClass[MAX_PRECEDING];
+        int[] before = new int[MAX_PRECEDING + 1];
+        HeadClass[] beforeClasses = new HeadClass[MAX_PRECEDING + 1];
         int found = 0;
         boolean verbBefore = false;
         int verbsBefore = 0, lastVerb = -1;
         int lowest = Math.max(0, p - BACK_WINDOW);
-        for (int k = p - 1; k >= lowest && !(verbBefore && found == MAX_PRECEDING); k--) {
+        for (int k = p - 1; k >= lowest && !(verbBefore && found >= MAX_PRECEDING); k--) {
             HeadClass c = candidateClass(words, kinds, k);
+            boolean firstVerb = c == HeadClass.VERB && !verbBefore;
             if (c == HeadClass.VERB) {
                 verbBefore = true;
                 verbsBefore++;
                 lastVerb = k;
             }
-            if (c != null && found < MAX_PRECEDING) {
+            if (c != null && (found < MAX_PRECEDING || firstVerb)) {
                 before[found] = k;
                 beforeClasses[found] = c;
                 found++;
@@ -236,7 +292,8 @@ public final class HeadCandidateProposer {
         // subject) opens with its main verb, which takes an object and does block.
         boolean openingParticiple = verbsBefore == 1 && lastVerb == 0 && kinds[0] == PARTICIPLE
                 && kinds.length > 1 && (kinds[1] == PREPOSITION || kinds[1] == TO);
-        boolean relative = (kinds[object] == WH_PRONOUN || kinds[object] == RELATIVE_DETERMINER);
+        boolean relative = (kinds[object] == WH_PRONOUN || kinds[object] == RELATIVE_DETERMINER)
+                || isOneOf(words[object], RELATIVE_OBJECTS);
         if (!verbBefore || p == 0 || opensClause(kinds[p - 1]) || relative || openingParticiple) {
             following = followingHeads(words, kinds, object, after, afterClasses);
         }
@@ -398,6 +455,7 @@ public final class HeadCandidateProposer {
                 if (next == PROPER && (k == 0 || kinds[k - 1] != PROPER)) return HeadClass.NOUN;
                 return isNoun(next) ? null : HeadClass.NOUN;
             case NOUN:
+                if (isNoun(next) && isOneOf(words[k + 1], TIME_ADVERBIAL_NOUNS)) return HeadClass.NOUN;
                 return isNoun(next) ? null : HeadClass.NOUN;
             case PRONOUN:
             case WH_PRONOUN:
@@ -468,11 +526,11 @@ public final class HeadCandidateProposer {
         int n = kinds.length;
         for (int m = be + 1; m < n && m < be + PREDICATE_WINDOW; m++) {
             byte b = kinds[m];
-            if (b == ADJECTIVE) return m;
+            if (b == ADJECTIVE && !continuesAfterAdjective(kinds, m + 1)) return m;
             if (b == ADVERB && m + 1 < n && (kinds[m + 1] == CLAUSE_OPENER || kinds[m + 1] == FULL_STOP)) return m;
             if (isNoun(b)) return endOfRun(kinds, m);
             if (b == PREPOSITION && !isOneOf(words[m], SUBORDINATORS)) return findObject(words, kinds, m);
-            if (b != DETERMINER && b != ADVERB && b != NUMBER && b != PHRASE_INNER) return -1;
+            if (b != DETERMINER && b != ADVERB && b != NUMBER && b != PHRASE_INNER && b != ADJECTIVE) return -1;
         }
         return -1;
     }

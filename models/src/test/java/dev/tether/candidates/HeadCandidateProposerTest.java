@@ -305,10 +305,12 @@ class HeadCandidateProposerTest {
         String s = "Keep/VB oil/NN ,/, rags/NNS ,/, rope/NN ,/, paint/NN ,/, tape/NN ,/, fuses/NNS ,/, bulbs/NNS ,/, "
                 + "and/CC filters/NNS in/IN the/DT locker/NN";
         PrepositionCandidates c = all(s).get(0);
-        assertEquals(HeadCandidateProposer.MAX_PRECEDING, c.size());
+        assertEquals(HeadCandidateProposer.MAX_PRECEDING + 1, c.size(), "the bound, and the nearest verb beyond it");
         assertEquals(16, c.head(0), "filters is the nearest");
-        assertEquals(-1, c.indexOf(0), "the verb is beyond the bound");
+        assertEquals(HeadCandidateProposer.MAX_PRECEDING, c.indexOf(0), "the verb beyond the bound comes last");
         assertFalse(c.isQuadruple(), "a coordinator, not a verb, precedes 'filters'");
+        PrepositionCandidates noVerb = all(s.substring(s.indexOf(' ') + 1)).get(0);
+        assertEquals(HeadCandidateProposer.MAX_PRECEDING, noVerb.size(), "without a verb the bound holds: " + noVerb);
     }
 
     @Test
@@ -379,6 +381,79 @@ class HeadCandidateProposerTest {
     void tagsAndWordsMustPair() {
         assertThrows(IllegalArgumentException.class, () -> proposer.proposeAll(new String[]{"a"}, new String[0]));
         assertThrows(IndexOutOfBoundsException.class, () -> proposer.propose(new String[]{"a"}, new String[]{"DT"}, 3));
+    }
+
+    @Test
+    void theNearestVerbBeyondTheCapIsStillACandidate() {
+        // Six nouns and adverbs fill the candidates before any verb is reached; the nearest verb is added anyway
+        // (candidate recall on UD English EWT, measured: see the class comment).
+        PrepositionCandidates per = all("The/DT yard/NN has/VBZ not/RB supplied/VBN spare/JJ seals/NNS ,/, gaskets/NNS ,/, "
+                + "bolts/NNS and/CC shims/NNS for/IN the/DT aft/JJ ramp/NN at/IN Harbourside/NNP per/IN the/DT contract/NN ./.").get(2);
+        assertEquals(19, per.preposition());
+        assertEquals(7, per.size(), "six within the cap and the verb: " + per);
+        assertEquals(4, per.head(6), "supplied");
+        assertEquals(HeadClass.VERB, per.headClass(6));
+        PrepositionCandidates at = all("The/DT yard/NN has/VBZ not/RB supplied/VBN spare/JJ seals/NNS ,/, gaskets/NNS ,/, "
+                + "bolts/NNS and/CC shims/NNS for/IN the/DT aft/JJ ramp/NN at/IN Harbourside/NNP per/IN the/DT contract/NN ./.").get(1);
+        assertEquals(6, at.size(), "a verb within the cap adds nothing beyond it: " + at);
+    }
+
+    @Test
+    void unknownWordsGivenClosedClassTagsAreReadAsVerbsOrNouns() {
+        // Taggers give some unknown words the tag of a closed class (seen on UD English EWT dev: "forces on Tuesday
+        // condemned/CC Sharon", "customers adds/IN entertainment to the meal"); invented lines of the same shape.
+        PrepositionCandidates to = all("The/DT crew/NN adds/IN grease/NN to/IN the/DT winch/NN ./.").get(0);
+        assertEquals(HeadClass.VERB, to.headClass(to.indexOf(2)), "adds after its subject is a verb: " + to);
+        PrepositionCandidates like = all("There/EX are/VBP also/RB checks/IN like/IN bilge/NN soundings/NNS ./.").get(0);
+        assertEquals(HeadClass.NOUN, like.headClass(like.indexOf(3)), "checks is a noun: " + like);
+        PrepositionCandidates by = all("The/DT mate/NN wants/VBZ to/TO welcome/UH the/DT surveyor/NN by/IN name/NN ./.").get(0);
+        assertEquals(HeadClass.VERB, by.headClass(by.indexOf(4)), "an interjection after 'to' is a verb: " + by);
+        List<PrepositionCandidates> plain = all("The/DT crew/NN worked/VBD during/IN the/DT night/NN plus/CC the/DT weekend/NN ./.");
+        assertEquals(1, plain.size(), "'during' and 'plus' keep their classes: " + plain);
+        assertTrue(plain.get(0).indexOf(6) < 0, "'plus' is no candidate head");
+    }
+
+    @Test
+    void aWordThatIsOnlyEverAPrepositionIsOneWhateverItsTag() {
+        PrepositionCandidates at = all("The/DT mate/NN logged/VBD the/DT leak/NN at/NN Pier/NNP 4/CD ./.").get(0);
+        assertEquals(5, at.preposition());
+        assertArrayEquals(new int[]{4, 2, 1}, heads(at), "leak, logged, mate");
+    }
+
+    @Test
+    void aWordOfLettersTaggedAsPunctuationAfterItsSubjectIsAVerb() {
+        // "buses ply/. frequently between ..." (seen on UD English EWT dev); an invented line of the same shape.
+        PrepositionCandidates between = all("Two/CD ferries/NNS ply/. daily/RB between/IN Harbourside/NNP and/CC Gull/NNP Island/NNP ./.").get(0);
+        assertTrue(between.indexOf(2) >= 0, "ply is a candidate: " + between);
+        assertEquals(HeadClass.VERB, between.headClass(between.indexOf(2)));
+    }
+
+    @Test
+    void aNounOfTimeAfterANounLeavesThatNounACandidate() {
+        // "the meeting today at 10": "today" is an adverbial of its own, not the last word of "meeting today".
+        PrepositionCandidates at = all("Crews/NNS attend/VBP the/DT safety/NN briefing/NN today/NN at/IN 10/CD ./.").get(0);
+        assertArrayEquals(new int[]{5, 4, 1, 0}, heads(at), "today, briefing, attend, Crews: " + at);
+        PrepositionCandidates plain = all("Crews/NNS attend/VBP the/DT safety/NN briefing/NN room/NN at/IN 10/CD ./.").get(0);
+        assertArrayEquals(new int[]{5, 1, 0}, heads(plain), "'briefing room' is one run: " + plain);
+    }
+
+    @Test
+    void whichAsAnObjectMakesThePhrasePartOfTheRelativeClauseWhateverItsTag() {
+        // "the entity to which/DT it is addressed" (seen on UD English EWT dev with a web-trained tagger).
+        PrepositionCandidates to = all("Send/VB the/DT log/NN to/IN the/DT office/NN to/IN which/DT it/PRP is/VBZ addressed/VBN ./.").get(1);
+        assertTrue(to.indexOf(10) >= 0, "addressed, after the relative clause's subject, is a candidate: " + to);
+    }
+
+    @Test
+    void thePredicateOfBeIsTheNounOrLastAdjectiveOfItsPhrase() {
+        // A fronted phrase also gets the predicate of a following "be": the noun of "our main meal" and the last
+        // adjective of "very much involved", not the first adjective (UD heads such clauses on the predicate).
+        PrepositionCandidates in = all("In/IN winter/NN the/DT evening/NN crossing/NN is/VBZ our/PRP$ main/JJ run/NN ./.").get(0);
+        assertTrue(in.indexOf(8) >= 0, "run: " + in);
+        assertTrue(in.indexOf(7) < 0, "not main: " + in);
+        PrepositionCandidates like = all("Like/IN Ben/NNP ,/, I/PRP will/MD still/RB be/VB very/RB much/JJ involved/JJ ./.").get(0);
+        assertTrue(like.indexOf(9) >= 0, "involved: " + like);
+        assertTrue(like.indexOf(8) < 0, "not much: " + like);
     }
 
     private static int[] heads(PrepositionCandidates c) {
