@@ -11,6 +11,7 @@ import dev.tether.preprocessing.TreebankTaggerTrainer;
 import dev.tether.model.TetherModel;
 import dev.tether.pipeline.TetherPipeline;
 import dev.tether.ranking.Lbfgs;
+import dev.tether.ranking.RankerModel;
 import dev.tether.ranking.RankerTrainer;
 import dev.tether.treebank.TreebankExampleExtractor;
 import dev.tether.treebank.TreebankExamples;
@@ -58,7 +59,8 @@ public final class RankerAblation {
         TreebankTaggerTrainer taggerTrainer = new TreebankTaggerTrainer();
         taggerTrainer.add(root.resolve("test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz"));
         tagger = taggerTrainer.train();
-        System.out.printf("%-28s %9s %9s %9s %9s %9s%n", "configuration", "e2e", "e2e-count", "gold-tags", "gold-count", "train-s");
+        System.out.printf("%-28s %9s %9s %9s %9s %9s %9s%n", "configuration", "e2e", "e2e-count", "gold-tags", "gold-count",
+                "cv-loss", "train-s");
         for (String w : what) {
             if (w.equals("full")) run("all families", EnumSet.allOf(AttachmentFeatureFamily.class), 1.0, rrr, ewt, devGold, dev, quick);
             if (w.equals("ablation")) {
@@ -75,6 +77,13 @@ public final class RankerAblation {
                 }
             }
         }
+    }
+
+    /** The held-out log-loss, on folds of the training decisions, of the L2 strength the trainer chose. */
+    private static double chosenLogLoss(TetherModel model) {
+        RankerModel w = model.attachmentRanker().orElseThrow().weights();
+        for (RankerTrainer.Trial t : w.trials()) if (t.l2() == w.l2()) return t.logLoss();
+        throw new IllegalStateException("no cross-validation trial for the chosen L2 " + w.l2());
     }
 
     private static void run(String name, EnumSet<AttachmentFeatureFamily> families, double share, QuadrupleSet rrr,
@@ -97,9 +106,9 @@ public final class RankerAblation {
             } finally {
                 pipeline.destroy();
             }
-            System.out.printf(Locale.ROOT, "%-28s %8.2f%% %8.2f%% %8.2f%% %8.2f%% %9.1f%n", name, 100 * e2e.attachment().value(),
+            System.out.printf(Locale.ROOT, "%-28s %8.2f%% %8.2f%% %8.2f%% %8.2f%% %9.4f %9.1f%n", name, 100 * e2e.attachment().value(),
                     100 * e2e.baselines().get(RunningTextEvaluation.COUNT_SCORE).value(), 100 * gold.attachment().value(),
-                    100 * gold.comparisons().get(GoldTagEvaluation.COUNT_SCORE).value(), seconds);
+                    100 * gold.comparisons().get(GoldTagEvaluation.COUNT_SCORE).value(), chosenLogLoss(model), seconds);
         } finally {
             Files.deleteIfExists(file);
         }
