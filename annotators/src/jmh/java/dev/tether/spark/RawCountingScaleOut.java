@@ -1,5 +1,6 @@
 package dev.tether.spark;
 
+import dev.tether.cli.HeapPeak;
 import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.counts.RawTextAttachmentCounting;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -14,16 +15,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 
 import java.io.IOException;
-import com.sun.management.GarbageCollectionNotificationInfo;
 
-import javax.management.NotificationEmitter;
-import javax.management.openmbean.CompositeData;
-import java.lang.management.GarbageCollectorMXBean;
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryUsage;
-import java.util.concurrent.atomic.AtomicLong;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
@@ -37,8 +29,10 @@ import java.util.stream.Stream;
  * (every {@code .txt} below {@link #corpus}) is laid out {@link #repeat} times (hard links, no copies) and counted by
  * {@code runner}: {@code threads-1} is the single-machine count ({@link RawTextAttachmentCounting} on one thread),
  * {@code local-N} the Spark job on an embedded {@code local[N]} (its context started before the shot; its start is
- * reported apart). Each fork records the tokens counted and the peak heap of its process, which for an embedded
- * master is the one executor's (with the driver), in the file named by {@code tether.benchmark.record}.
+ * reported apart). Each fork records the tokens counted and the peak heap of its process at one instant, before and
+ * after collections ({@link HeapPeak}), which for an embedded master is the one executor's (with the driver), in the
+ * file named by {@code tether.benchmark.record}. {@code -jvmArgs -XmxN} caps the fork's heap: a run that completes
+ * shows that the counting fits in N.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
@@ -57,8 +51,8 @@ public class RawCountingScaleOut {
     private SparkJob job;
     private double contextSeconds;
     private RawAttachmentCounts last;
-    /** The most the heap held right after a collection: what the process needed, garbage left out. */
-    private final AtomicLong peakAfterCollection = new AtomicLong();
+    /** The heap's peak at one instant, before and after collections (not a sum of each pool's own peak). */
+    private HeapPeak heap;
 
     @Setup(Level.Trial)
     public void setUp() throws IOException {
@@ -80,16 +74,7 @@ public class RawCountingScaleOut {
             job = SparkJob.start(SparkMaster.parse("local[" + runner.substring("local-".length()) + "]"), "benchmark");
             contextSeconds = (System.nanoTime() - start) / 1e9;
         }
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) pool.resetPeakUsage();
-        for (GarbageCollectorMXBean gc : ManagementFactory.getGarbageCollectorMXBeans()) {
-            ((NotificationEmitter) gc).addNotificationListener((n, handback) -> {
-                if (!GarbageCollectionNotificationInfo.GARBAGE_COLLECTION_NOTIFICATION.equals(n.getType())) return;
-                GarbageCollectionNotificationInfo info = GarbageCollectionNotificationInfo.from((CompositeData) n.getUserData());
-                long live = 0;
-                for (MemoryUsage u : info.getGcInfo().getMemoryUsageAfterGc().values()) live += u.getUsed();
-                peakAfterCollection.accumulateAndGet(live, Math::max);
-            }, null, null);
-        }
+        heap = HeapPeak.start();
     }
 
     @Benchmark
@@ -108,15 +93,14 @@ public class RawCountingScaleOut {
 
     @TearDown(Level.Trial)
     public void tearDown() throws IOException {
-        long peak = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) peak += pool.getPeakUsage().getUsed();
-        }
+        long peak = heap.peakBytes();
+        long peakAfterCollection = heap.peakAfterCollectionBytes();
+        heap.close();
         if (job != null) job.close();
         String record = System.getProperty("tether.benchmark.record");
         if (record != null && last != null) {
             String line = String.format("%s %d %d %.2f %d %d%n", runner, last.tally().tokens(), peak, contextSeconds,
-                    last.tally().documents(), peakAfterCollection.get());
+                    last.tally().documents(), peakAfterCollection);
             Files.writeString(Path.of(record), line, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
         }
         try (Stream<Path> all = Files.walk(work)) {

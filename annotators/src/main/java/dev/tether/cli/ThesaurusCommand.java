@@ -25,9 +25,6 @@ import dev.tether.vocabulary.WordNormalizer;
 
 import java.io.IOException;
 import java.io.PrintStream;
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -159,52 +156,54 @@ final class ThesaurusCommand implements Command {
             }
         }
 
-        long start = System.nanoTime();
-        ContextCounter counter = new ContextCounter();
-        RawTextCounting.Summary counted;
-        String where;
-        if (spark == null) {
-            counted = new RawTextCounting(threads).count(inputs, counter);
-            where = threads + " threads";
-        } else {
-            List<String> locations = a.values("raw");
-            for (String r : locations) {
-                if (!DocumentFiles.isFileSystemUri(r) && !java.nio.file.Files.exists(Path.of(r))) {
-                    throw new IOException(r + " does not exist; give raw text files or folders of .txt files");
+        try (HeapPeak heap = HeapPeak.start()) {
+            long start = System.nanoTime();
+            ContextCounter counter = new ContextCounter();
+            RawTextCounting.Summary counted;
+            String where;
+            if (spark == null) {
+                counted = new RawTextCounting(threads).count(inputs, counter);
+                where = threads + " threads";
+            } else {
+                List<String> locations = a.values("raw");
+                for (String r : locations) {
+                    if (!DocumentFiles.isFileSystemUri(r) && !java.nio.file.Files.exists(Path.of(r))) {
+                        throw new IOException(r + " does not exist; give raw text files or folders of .txt files");
+                    }
+                }
+                SparkLibraries.require();
+                try (SparkJob job = SparkJob.start(spark, "tether thesaurus build")) {
+                    job.checkExecutors(locations, null, null, null);
+                    counted = job.countContexts(locations, counter);
+                    where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
                 }
             }
-            SparkLibraries.require();
-            try (SparkJob job = SparkJob.start(spark, "tether thesaurus build")) {
-                job.checkExecutors(locations, null, null, null);
-                counted = job.countContexts(locations, counter);
-                where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
-            }
-        }
-        long built = System.nanoTime();
-        Thesaurus thesaurus = ThesaurusBuilder.build(counter, settings, threads);
-        double buildSeconds = (System.nanoTime() - built) / 1e9;
-        ThesaurusFile.write(thesaurus, target);
-        double seconds = (System.nanoTime() - start) / 1e9;
+            long built = System.nanoTime();
+            Thesaurus thesaurus = ThesaurusBuilder.build(counter, settings, threads);
+            double buildSeconds = (System.nanoTime() - built) / 1e9;
+            ThesaurusFile.write(thesaurus, target);
+            double seconds = (System.nanoTime() - start) / 1e9;
 
-        out.printf("read     %,d documents, %,d sentences, %,d tokens (%.1f s, %s)%n", counted.documents(),
-                counted.sentences(), counted.tokens(), counted.seconds(), where);
-        out.printf("skipped  %,d documents%s%n", counted.skippedCount(), counted.skippedCount() == 0 ? "" : ":");
-        for (Map.Entry<RawTextCounting.Skip, List<String>> e : counted.skipped().entrySet()) {
-            out.printf("  %-16s %,d%n", e.getKey().label(), e.getValue().size());
-            for (String f : e.getValue().subList(0, Math.min(5, e.getValue().size()))) out.println("    " + f);
-            if (e.getValue().size() > 5) out.printf("    ... and %,d more%n", e.getValue().size() - 5);
+            out.printf("read     %,d documents, %,d sentences, %,d tokens (%.1f s, %s)%n", counted.documents(),
+                    counted.sentences(), counted.tokens(), counted.seconds(), where);
+            out.printf("skipped  %,d documents%s%n", counted.skippedCount(), counted.skippedCount() == 0 ? "" : ":");
+            for (Map.Entry<RawTextCounting.Skip, List<String>> e : counted.skipped().entrySet()) {
+                out.printf("  %-16s %,d%n", e.getKey().label(), e.getValue().size());
+                for (String f : e.getValue().subList(0, Math.min(5, e.getValue().size()))) out.println("    " + f);
+                if (e.getValue().size() > 5) out.printf("    ... and %,d more%n", e.getValue().size() - 5);
+            }
+            if (counted.notDocuments() > 0) {
+                out.printf("not read %,d entries below the inputs that are not %s documents (other endings, hidden files, links)%n",
+                        counted.notDocuments(), DocumentFiles.EXTENSION);
+            }
+            out.printf("words    %,d nouns, %,d verbs, %,d adjectives with at least %d tokens%n", thesaurus.size(HeadClass.NOUN),
+                    thesaurus.size(HeadClass.VERB), thesaurus.size(HeadClass.ADJECTIVE), settings.minFrequency());
+            out.printf("vectors  %,d contexts (%s), %,d weights (%s); neighbours by %s, k=%d (%.1f s)%n", thesaurus.contexts(),
+                    settings.contexts().label(), thesaurus.vectorEntries(), settings.weighting().label(),
+                    settings.measure().label(), settings.neighbours(), buildSeconds);
+            out.printf("wrote    %s  (%.1f s in all, peak heap %.0f MB)%n", target, seconds, heap.peakBytes() / 1e6);
+            return counted.documents() == 0 ? Tether.INPUT : counted.skippedCount() > 0 ? Tether.SOME_FAILED : Tether.OK;
         }
-        if (counted.notDocuments() > 0) {
-            out.printf("not read %,d entries below the inputs that are not %s documents (other endings, hidden files, links)%n",
-                    counted.notDocuments(), DocumentFiles.EXTENSION);
-        }
-        out.printf("words    %,d nouns, %,d verbs, %,d adjectives with at least %d tokens%n", thesaurus.size(HeadClass.NOUN),
-                thesaurus.size(HeadClass.VERB), thesaurus.size(HeadClass.ADJECTIVE), settings.minFrequency());
-        out.printf("vectors  %,d contexts (%s), %,d weights (%s); neighbours by %s, k=%d (%.1f s)%n", thesaurus.contexts(),
-                settings.contexts().label(), thesaurus.vectorEntries(), settings.weighting().label(),
-                settings.measure().label(), settings.neighbours(), buildSeconds);
-        out.printf("wrote    %s  (%.1f s in all, peak heap %.0f MB)%n", target, seconds, peakHeapBytes() / 1e6);
-        return counted.documents() == 0 ? Tether.INPUT : counted.skippedCount() > 0 ? Tether.SOME_FAILED : Tether.OK;
     }
 
     private int query(String[] args, PrintStream out) throws UsageException, IOException {
@@ -288,14 +287,5 @@ final class ThesaurusCommand implements Command {
         } catch (NumberFormatException e) {
             throw new UsageException("--" + name + " takes a whole number, got '" + v + "'");
         }
-    }
-
-    /** Sum of the peak usage of the heap's memory pools since the JVM started. */
-    private static long peakHeapBytes() {
-        long peak = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP && pool.getPeakUsage() != null) peak += pool.getPeakUsage().getUsed();
-        }
-        return peak;
     }
 }
