@@ -46,6 +46,16 @@ final class CountShard implements Serializable {
         return building;
     }
 
+    /**
+     * Turns the tables counted into an immutable copy, emptying the builder as the copy grows
+     * ({@link RawAttachmentCountsBuilder#buildAndEmpty}): a task's result then travels without a second copy.
+     */
+    void freeze() {
+        if (building == null) return;
+        received = building.buildAndEmpty();
+        building = null;
+    }
+
     void skip(String[] kindAndReason) {
         skipped.add(kindAndReason);
     }

@@ -67,6 +67,7 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
                 if (afterDocument != null) afterDocument.check(task.partitionId(), task.attemptNumber(), counted);
             }
             flow.jcas().reset();
+            shard.freeze();
         } finally {
             IDLE.add(flow);
         }

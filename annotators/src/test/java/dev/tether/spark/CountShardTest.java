@@ -41,6 +41,17 @@ class CountShardTest {
     }
 
     @Test
+    void aFrozenShardHoldsTheSameCountsAndTravelsAsTheBuilderWould() throws Exception {
+        CountShard shard = counted("pump/NN", "replaced/VBD", "seal/NN");
+        byte[] before = shard.counts().build().toBytes();
+        CountShard frozen = counted("pump/NN", "replaced/VBD", "seal/NN");
+        frozen.freeze();
+        CountShard zero = travelled(new CountShard());
+        zero.merge(travelled(frozen));
+        assertArrayEquals(before, zero.counts().build().toBytes());
+    }
+
+    @Test
     void mergesGiveTheSameCountsWhetherTheShardsTravelledOrNot() throws Exception {
         CountShard a = counted("pump/NN", "replaced/VBD", "seal/NN");
         CountShard b = counted("pump/NN", "gasket/NN", "fitted/VBD");

@@ -15,13 +15,13 @@ import dev.tether.vocabulary.WordNormalizer;
  */
 public final class RawAttachmentCountsBuilder {
     private final WordNormalizer normalizer = new WordNormalizer();
-    private final QuadrupleCountsBuilder events = new QuadrupleCountsBuilder();
-    private final HeadChoiceCountsBuilder cooccurrence = new HeadChoiceCountsBuilder();
-    private final QuadrupleCountsBuilder ambiguous = new QuadrupleCountsBuilder();
-    private final WordFrequencies.Builder words = new WordFrequencies.Builder();
+    private QuadrupleCountsBuilder events = new QuadrupleCountsBuilder();
+    private HeadChoiceCountsBuilder cooccurrence = new HeadChoiceCountsBuilder();
+    private QuadrupleCountsBuilder ambiguous = new QuadrupleCountsBuilder();
+    private WordFrequencies.Builder words = new WordFrequencies.Builder();
     // Noun and verb tokens by surface form: normalized once per distinct form, in build(), not once per token.
-    private final WordFrequencies.Builder nounForms = new WordFrequencies.Builder();
-    private final WordFrequencies.Builder verbForms = new WordFrequencies.Builder();
+    private WordFrequencies.Builder nounForms = new WordFrequencies.Builder();
+    private WordFrequencies.Builder verbForms = new WordFrequencies.Builder();
     private RawAttachmentCounts.Tally tally = RawAttachmentCounts.Tally.ZERO;
     private long prepositions;
     private long unambiguous;
@@ -110,13 +110,46 @@ public final class RawAttachmentCountsBuilder {
 
     /** The counts so far, words numbered in sorted order. */
     public RawAttachmentCounts build() {
+        WordFrequencies all = allWords();
+        return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(), all,
+                wholeTally());
+    }
+
+    /**
+     * What {@link #build} gives, emptying this builder table by table as each one is built, so that the builder and
+     * the counts it builds are never both whole in memory (a partition's tables are about the size of a corpus's);
+     * the builder is empty afterwards.
+     */
+    public RawAttachmentCounts buildAndEmpty() {
+        WordFrequencies all = allWords();
+        words = new WordFrequencies.Builder();
+        nounForms = new WordFrequencies.Builder();
+        verbForms = new WordFrequencies.Builder();
+        QuadrupleCounts builtEvents = events.buildSorted();
+        events = new QuadrupleCountsBuilder();
+        HeadChoiceCounts builtCooccurrence = cooccurrence.buildSorted();
+        cooccurrence = new HeadChoiceCountsBuilder();
+        QuadrupleCounts builtAmbiguous = ambiguous.buildSorted();
+        ambiguous = new QuadrupleCountsBuilder();
+        RawAttachmentCounts.Tally whole = wholeTally();
+        tally = RawAttachmentCounts.Tally.ZERO;
+        prepositions = 0;
+        unambiguous = 0;
+        ambiguousQuadruples = 0;
+        return new RawAttachmentCounts(builtEvents, builtCooccurrence, builtAmbiguous, all, whole);
+    }
+
+    private WordFrequencies allWords() {
         WordFrequencies.Builder all = new WordFrequencies.Builder();
         all.addAll(words.build());
         WordFrequencies nouns = nounForms.build();
         for (int i = 0; i < nouns.size(); i++) all.add(normalizer.noun(nouns.word(i)), nouns.count(i));
         WordFrequencies verbs = verbForms.build();
         for (int i = 0; i < verbs.size(); i++) all.add(normalizer.verb(verbs.word(i)), verbs.count(i));
-        return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(),
-                all.build(), tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples)));
+        return all.build();
+    }
+
+    private RawAttachmentCounts.Tally wholeTally() {
+        return tally.plus(new RawAttachmentCounts.Tally(0, 0, 0, 0, prepositions, unambiguous, ambiguousQuadruples));
     }
 }

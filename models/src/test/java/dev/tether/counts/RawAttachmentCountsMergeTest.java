@@ -86,6 +86,24 @@ class RawAttachmentCountsMergeTest {
         assertEquals(1500, abc.build().words().total());
     }
 
+    @Test
+    void buildingAndEmptyingGivesTheSameBytesAndLeavesAnEmptyBuilder() {
+        RawAttachmentCountsBuilder b = new RawAttachmentCountsBuilder();
+        for (AttachmentQuery q : queries(4, 400)) {
+            b.add(q);
+            tokens(q, b);
+        }
+        b.addDocument(3, 4000);
+        b.addSkippedDocument();
+        byte[] built = b.build().toBytes();
+        RawAttachmentCounts emptied = b.buildAndEmpty();
+        assertArrayEquals(built, emptied.toBytes(), "the same counts, whichever way they are built");
+        assertEquals(400, emptied.tally().prepositions());
+        assertArrayEquals(new RawAttachmentCountsBuilder().build().toBytes(), b.build().toBytes(), "nothing is left");
+        b.addAll(emptied);
+        assertArrayEquals(built, b.build().toBytes(), "the emptied builder counts again from nothing");
+    }
+
     /** The words of a query's sentence as the counter sees tokens: the object (a noun) and the first candidate. */
     private static void tokens(AttachmentQuery q, RawAttachmentCountsBuilder b) {
         b.addToken(q.object(), "NN");
