@@ -120,7 +120,7 @@ public final class DocumentFiles {
                 if (attrs.isSymbolicLink()) why = Skip.LINK;
                 else if (hidden(file)) why = Skip.HIDDEN;
                 else if (!attrs.isRegularFile()) why = Skip.UNREADABLE;
-                else if (!file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(EXTENSION)) why = Skip.OTHER_EXTENSION;
+                else if (!hasDocumentEnding(file.getFileName().toString())) why = Skip.OTHER_EXTENSION;
                 else why = null;
                 if (why == null) documents.add(file);
                 else skipped[why.ordinal()]++;
@@ -138,7 +138,17 @@ public final class DocumentFiles {
     }
 
     private static boolean hidden(Path p) {
-        return p.getFileName() != null && p.getFileName().toString().startsWith(".");
+        return p.getFileName() != null && isHiddenName(p.getFileName().toString());
+    }
+
+    /** Whether a file or folder named {@code name} is hidden (its name starts with a dot) and so skipped. */
+    public static boolean isHiddenName(String name) {
+        return name.startsWith(".");
+    }
+
+    /** Whether a file named {@code name} has the document ending, {@value #EXTENSION} in any letter case. */
+    public static boolean hasDocumentEnding(String name) {
+        return name.toLowerCase(Locale.ROOT).endsWith(EXTENSION);
     }
 
 }

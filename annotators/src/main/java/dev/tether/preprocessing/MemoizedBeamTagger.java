@@ -21,7 +21,7 @@ import java.util.PriorityQueue;
  *   <li>a hypothesis is a link to its parent, not a copied list of tags and probabilities;</li>
  *   <li>the cut-off (the beam-th best score of an expansion) is selected, not found by sorting every score.</li>
  * </ul>
- * {@code MemoizedBeamTaggerTest} checks tag for tag against {@link POSTaggerME} over UD English EWT sentences, for the
+ * {@code MemoizedBeamTaggerEwtTest} (test-corpora) checks tag for tag against {@link POSTaggerME} over UD English EWT sentences, for the
  * default model's tagger and for the shipped OpenNLP model. Not thread-safe (the context generator keeps caches, as
  * in {@link POSTaggerME}): one per engine instance; the {@link POSModel} itself is shared.
  */
@@ -165,22 +165,16 @@ public final class MemoizedBeamTagger {
         int k = Math.min(beam, scores.length);
         int filled = 0;
         for (double s : scores) {
-            // best[0..filled) holds the largest values so far, in descending order.
-            if (filled < k) {
-                int j = filled++;
-                while (j > 0 && Double.compare(best[j - 1], s) < 0) {
-                    best[j] = best[j - 1];
-                    j--;
-                }
-                best[j] = s;
-            } else if (Double.compare(s, best[k - 1]) > 0) {
-                int j = k - 1;
-                while (j > 0 && Double.compare(best[j - 1], s) < 0) {
-                    best[j] = best[j - 1];
-                    j--;
-                }
-                best[j] = s;
+            // best[0..filled) holds the largest values so far, in descending order; s goes in by insertion.
+            int j;
+            if (filled < k) j = filled++;
+            else if (Double.compare(s, best[k - 1]) > 0) j = k - 1;
+            else continue;
+            while (j > 0 && Double.compare(best[j - 1], s) < 0) {
+                best[j] = best[j - 1];
+                j--;
             }
+            best[j] = s;
         }
         return best[k - 1];
     }

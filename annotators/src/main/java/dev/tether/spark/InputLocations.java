@@ -15,7 +15,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -79,13 +78,11 @@ final class InputLocations {
         long skipped = 0;
         for (FileStatus entry : fs.listStatus(folder.getPath())) {
             String name = entry.getPath().getName();
-            if (name.startsWith(".")) {
-                skipped++;
-            } else if (entry.isSymlink()) {
+            if (DocumentFiles.isHiddenName(name) || entry.isSymlink()) {
                 skipped++;
             } else if (entry.isDirectory()) {
                 skipped += walk(fs, entry, documents);
-            } else if (!entry.isFile() || !name.toLowerCase(Locale.ROOT).endsWith(DocumentFiles.EXTENSION)) {
+            } else if (!entry.isFile() || !DocumentFiles.hasDocumentEnding(name)) {
                 skipped++;
             } else {
                 documents.add(entry);

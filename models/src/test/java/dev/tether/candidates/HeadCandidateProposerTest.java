@@ -387,14 +387,14 @@ class HeadCandidateProposerTest {
     void theNearestVerbBeyondTheCapIsStillACandidate() {
         // Six nouns and adverbs fill the candidates before any verb is reached; the nearest verb is added anyway
         // (candidate recall on UD English EWT, measured: see the class comment).
-        PrepositionCandidates per = all("The/DT yard/NN has/VBZ not/RB supplied/VBN spare/JJ seals/NNS ,/, gaskets/NNS ,/, "
-                + "bolts/NNS and/CC shims/NNS for/IN the/DT aft/JJ ramp/NN at/IN Harbourside/NNP per/IN the/DT contract/NN ./.").get(2);
+        List<PrepositionCandidates> c = all("The/DT yard/NN has/VBZ not/RB supplied/VBN spare/JJ seals/NNS ,/, gaskets/NNS ,/, "
+                + "bolts/NNS and/CC shims/NNS for/IN the/DT aft/JJ ramp/NN at/IN Harbourside/NNP per/IN the/DT contract/NN ./.");
+        PrepositionCandidates per = c.get(2);
         assertEquals(19, per.preposition());
         assertEquals(7, per.size(), "six within the cap and the verb: " + per);
         assertEquals(4, per.head(6), "supplied");
         assertEquals(HeadClass.VERB, per.headClass(6));
-        PrepositionCandidates at = all("The/DT yard/NN has/VBZ not/RB supplied/VBN spare/JJ seals/NNS ,/, gaskets/NNS ,/, "
-                + "bolts/NNS and/CC shims/NNS for/IN the/DT aft/JJ ramp/NN at/IN Harbourside/NNP per/IN the/DT contract/NN ./.").get(1);
+        PrepositionCandidates at = c.get(1);
         assertEquals(6, at.size(), "a verb within the cap adds nothing beyond it: " + at);
     }
 
