@@ -39,8 +39,10 @@ public final class ConjunctCandidateProposer {
     static final int CLAUSE = 30;
 
     private static final String[] PRECONJUNCTIONS = {"both", "either", "neither", "whether"};
-    private static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re"};
-    private static final String[] AUXILIARIES = {"have", "has", "had", "'ve", "'d", "do", "does", "did", "having"};
+    /** Forms of "be", with the curly-apostrophe clitics and the unpunctuated ones of informal text ("it s", "i m", "you r"). */
+    static final String[] FORMS_OF_BE = {"is", "was", "are", "were", "be", "been", "being", "am", "'s", "'m", "'re",
+            "\u2019s", "\u2019m", "\u2019re", "s", "m", "r", "re"};
+    static final String[] AUXILIARIES = {"have", "has", "had", "'ve", "'d", "do", "does", "did", "having", "\u2019ve", "\u2019d"};
     private static final String[] CLAUSE_OPENERS = {"if", "when", "since", "once", "because", "while", "although", "though",
             "unless", "whenever", "after", "before", "until"};
     private static final String[] SUBORDINATORS = {"because", "if", "that", "while", "as", "since", "though", "although",
@@ -427,11 +429,11 @@ public final class ConjunctCandidateProposer {
         }
     }
 
-    private static boolean isAuxiliary(String word) {
+    static boolean isAuxiliary(String word) {
         return isOneOf(word, FORMS_OF_BE) || isOneOf(word, AUXILIARIES);
     }
 
-    private static boolean isVerb(byte kind) {
+    static boolean isVerb(byte kind) {
         return kind == VERB || kind == PARTICIPLE;
     }
 

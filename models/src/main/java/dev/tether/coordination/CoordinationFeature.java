@@ -102,10 +102,25 @@ enum CoordinationFeature {
     /** The first head begins a comma list that ends at the coordinator; parts: class pair. */
     LIST_FIRST(CoordinationFeatureFamily.PUNCTUATION, 1),
     /** A verbal first head inside a subordinate or relative clause; parts: whether the last conjunct has its own subject. */
-    LEFT_SUBORDINATE(CoordinationFeatureFamily.STRUCTURE, 1);
+    LEFT_SUBORDINATE(CoordinationFeatureFamily.STRUCTURE, 1),
+    /** Whether each head predicates a clause (see {@link CoordinationFeatureExtractor#leftPredicate}); parts: left, right, class pair. */
+    PREDICATES(CoordinationFeatureFamily.STRUCTURE, 1),
+    /** A nominal last conjunct: whether it opens with a determiner, whether its head ends its group; parts: both, class pair. */
+    RIGHT_SHAPE(CoordinationFeatureFamily.PARALLELISM, 1),
+    /** A nominal first head: the preposition before its group and "of" after it, with a determiner opening the last conjunct; parts: before, after and determiner, class pair. */
+    LEFT_PHRASE(CoordinationFeatureFamily.STRUCTURE, 1),
+    /** A coordinator right before the first head's group: the head is itself a later conjunct; parts: class pair. */
+    LEFT_AFTER_COORDINATOR(CoordinationFeatureFamily.PUNCTUATION, 1),
+    /** The tags right before each head; parts: left tag, right tag, class pair. */
+    PREVIOUS_TAGS(CoordinationFeatureFamily.PARALLELISM, 2),
+    /** A verbal first head that is an auxiliary or modal before a verb of its own ("does not change"); parts: class pair. */
+    LEFT_AUXILIARY(CoordinationFeatureFamily.STRUCTURE, 1),
+    /** {@link #RANK_FROM_START} with whether the last conjunct is a clause with its own subject; parts: count, clause, class pair. */
+    CLAUSE_RANK_FROM_START(CoordinationFeatureFamily.DISTANCE, 1);
 
     static final String[] COORDINATORS = {"", "and", "or", "but", "nor", "&", "yet", "plus", "so", "/", "as", "rather"};
     private static final CoordinationFeature[] ALL = values();
+    private static final String[] PREDICATE_ROLES = {"no predicate", "a verb", "a predicate after a copula", "a copula"};
     private static final String[] NAME_PLACES = {"not a name, or inside one", "first word", "last word", "one word"};
 
     final CoordinationFeatureFamily family;
@@ -175,6 +190,16 @@ enum CoordinationFeature {
             case SHARED_COMMA: return "a comma before the coordinator";
             case NAME_POSITIONS: return "the heads' places in their names (" + NAME_PLACES[a] + ", " + NAME_PLACES[FeatureKey.b(key)] + ")";
             case LIST_FIRST: return "the first item of a comma list";
+            case PREDICATES: return "the heads as predicates (" + PREDICATE_ROLES[a] + "; " + PREDICATE_ROLES[FeatureKey.b(key)] + ")";
+            case RIGHT_SHAPE: return (a / 2 == 1 ? "a last conjunct opening with a determiner" : "a last conjunct without a determiner")
+                    + (a % 2 == 1 ? ", its head at the end of its group" : ", its head inside its group");
+            case LEFT_PHRASE: return (a == 0 ? "a first head not after a preposition" : a == 1 ? "a first head after 'of'" : "a first head after a preposition")
+                    + (FeatureKey.b(key) / 2 == 1 ? ", 'of' after it" : "") + (FeatureKey.b(key) % 2 == 1 ? ", a determiner opening the last conjunct" : "");
+            case LEFT_AFTER_COORDINATOR: return "a first head that follows another coordinator";
+            case PREVIOUS_TAGS: return "the words before the heads tagged " + PennTags.tag(a) + " and " + PennTags.tag(FeatureKey.b(key));
+            case LEFT_AUXILIARY: return "a first head that is an auxiliary before its verb";
+            case CLAUSE_RANK_FROM_START: return (a == 0 ? "the first candidate of its class in the clause" : "a candidate with " + a + (a == 2 ? " or more" : "") + " of its class before it")
+                    + (FeatureKey.b(key) == 1 ? ", before a clause with its own subject" : "");
             case LEFT_SUBORDINATE: return "a first head inside a subordinate clause" + (a == 1 ? ", before a clause with its own subject" : "");
             default: return name();
         }

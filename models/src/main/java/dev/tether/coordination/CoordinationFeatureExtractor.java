@@ -55,6 +55,8 @@ public final class CoordinationFeatureExtractor {
         int c = cc.coordinator();
         int coordinator = CoordinationFeature.coordinator(w[c]);
         Vocabulary vocabulary = statistics.words();
+        byte[] kinds = new byte[t.length];
+        for (int k = 0; k < t.length; k++) kinds[k] = ConjunctCandidateProposer.kind(t[k]);
         int[] rankOf = new int[HeadClass.values().length * ConjunctCandidateProposer.MAX_RIGHT];
         int lastRight = -2;
         int readingIndex = -1;
@@ -97,6 +99,13 @@ public final class CoordinationFeatureExtractor {
                     out.add(CoordinationFeature.SAME_SUFFIX.key(0, 0, pairClass), 1);
                 }
                 if (lw.equals(rw)) out.add(CoordinationFeature.SAME_WORD.key(0, 0, pairClass), 1);
+                int leftPrevious = p.left() > 0 ? PennTags.id(t[p.left() - 1]) : 0;
+                int rightPrevious = PennTags.id(t[p.right() - 1]);
+                out.add(CoordinationFeature.PREVIOUS_TAGS.key(leftPrevious, rightPrevious, pairClass), 1);
+                if (p.rightClass() == HeadClass.NOUN) {
+                    boolean groupEnd = p.right() + 1 >= w.length || !isNominal(kinds[p.right() + 1]);
+                    out.add(CoordinationFeature.RIGHT_SHAPE.key((opensWithDeterminer(t, p) ? 2 : 0) + (groupEnd ? 1 : 0), 0, pairClass), 1);
+                }
             }
             int li = vocabulary.id(keys.key(w[p.left()], t[p.left()]));
             int ri = vocabulary.id(keys.key(w[p.right()], t[p.right()]));
@@ -113,6 +122,8 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.RANK.key(Math.min(rank, 3), lc == rc ? 1 : 0, pairClass), 1);
                 int fromStart = classCount[readingOf[i] * 4 + lc] - rank - 1;
                 out.add(CoordinationFeature.RANK_FROM_START.key(Math.min(fromStart, 2), lc == rc ? 1 : 0, pairClass), 1);
+                boolean clause = p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right());
+                out.add(CoordinationFeature.CLAUSE_RANK_FROM_START.key(Math.min(fromStart, 2), clause ? 1 : 0, pairClass), 1);
                 boolean groupEnd = p.left() + 1 >= w.length || ConjunctCandidateProposer.classOfTag(t[p.left() + 1]) != HeadClass.NOUN;
                 if (groupEnd) out.add(CoordinationFeature.GROUP_END.key(0, 0, lc), 1);
                 int verbs = 0;
@@ -143,6 +154,7 @@ public final class CoordinationFeatureExtractor {
                 }
                 if (inner) out.add(CoordinationFeature.INNER_COORDINATOR.key(0, 0, pairClass), 1);
                 if (insideList(cc, i)) out.add(CoordinationFeature.INSIDE_LIST.key(0, 0, pairClass), 1);
+                if (afterCoordinator(kinds, p)) out.add(CoordinationFeature.LEFT_AFTER_COORDINATOR.key(0, 0, pairClass), 1);
             }
             if (on(CoordinationFeatureFamily.STRUCTURE)) {
                 out.add(CoordinationFeature.COORDINATOR.key(coordinator, 0, pairClass), 1);
@@ -158,6 +170,15 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.LEFT_NEXT_TAG.key(leftNext, 0, pairClass), 1);
                 int rightNext = p.right() + 1 < w.length ? PennTags.id(t[p.right() + 1]) : 0;
                 out.add(CoordinationFeature.RIGHT_NEXT_TAG.key(rightNext, 0, pairClass), 1);
+                if (p.leftClass() == HeadClass.VERB && auxiliaryBeforeVerb(w, kinds, p.left(), c)) {
+                    out.add(CoordinationFeature.LEFT_AUXILIARY.key(0, 0, pairClass), 1);
+                }
+                out.add(CoordinationFeature.PREDICATES.key(leftPredicate(w, kinds, p.left()),
+                        rightPredicate(w, kinds, c, p.right()), pairClass), 1);
+                if (p.leftClass() == HeadClass.NOUN) {
+                    out.add(CoordinationFeature.LEFT_PHRASE.key(prepositionBefore(w, kinds, p.left()),
+                            (ofAfter(w, p.left()) ? 2 : 0) + (opensWithDeterminer(t, p) ? 1 : 0), pairClass), 1);
+                }
                 if (p.rightClass() == HeadClass.NOUN) {
                     int k = p.right() + 1;
                     while (k < w.length && (t[k].startsWith("RB") || t[k].equals("MD"))) k++;
@@ -238,6 +259,82 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.SHARED_SIMILARITY.key(kind, 0, 0), thesaurus.similarity(a, b));
             }
         }
+    }
+
+    /**
+     * How the first head {@code k} predicates a clause: 1 a verb, 2 a noun or adjective after a copula ("were all
+     * American citizens"), 3 a copula itself (a form of "be" before its predicate, which UD makes the head), 0 none.
+     */
+    static int leftPredicate(String[] w, byte[] kinds, int k) {
+        byte kind = kinds[k];
+        if (ConjunctCandidateProposer.isVerb(kind) || kind == ConjunctCandidateProposer.MODAL) return isCopula(w, kinds, k) ? 3 : 1;
+        if (!(isNominal(kind) || kind == ConjunctCandidateProposer.ADJECTIVE)) return 0;
+        int j = ConjunctCandidateProposer.groupBegin(kinds, k) - 1;
+        while (j >= 0 && kinds[j] == ConjunctCandidateProposer.ADVERB) j--;
+        return j >= 0 && ConjunctCandidateProposer.isVerb(kinds[j]) && ConjunctCandidateProposer.isOneOf(w[j], ConjunctCandidateProposer.FORMS_OF_BE) ? 2 : 0;
+    }
+
+    /** How the last head predicates a clause after coordinator {@code c}: 1 a verb, 2 a predicate after a copula, 0 none. */
+    static int rightPredicate(String[] w, byte[] kinds, int c, int right) {
+        if (ConjunctCandidateProposer.isVerb(kinds[right]) || kinds[right] == ConjunctCandidateProposer.MODAL) return 1;
+        for (int k = c + 1; k < right; k++) {
+            if (ConjunctCandidateProposer.isVerb(kinds[k]) && ConjunctCandidateProposer.isOneOf(w[k], ConjunctCandidateProposer.FORMS_OF_BE)) return 2;
+        }
+        return 0;
+    }
+
+    /** A form of "be" before a predicate (an adjective, a noun group or a phrase), not an auxiliary nor existential. */
+    static boolean isCopula(String[] w, byte[] kinds, int k) {
+        if (!ConjunctCandidateProposer.isOneOf(w[k], ConjunctCandidateProposer.FORMS_OF_BE)) return false;
+        for (int j = k - 1; j >= 0 && j >= k - 3; j--) {
+            if (kinds[j] == ConjunctCandidateProposer.EXISTENTIAL) return false;
+            if (!(kinds[j] == ConjunctCandidateProposer.MODAL || kinds[j] == ConjunctCandidateProposer.ADVERB)) break;
+        }
+        int p = k + 1;
+        while (p < kinds.length && kinds[p] == ConjunctCandidateProposer.ADVERB) p++;
+        if (p >= kinds.length) return false;
+        byte next = kinds[p];
+        return next == ConjunctCandidateProposer.ADJECTIVE || next == ConjunctCandidateProposer.DETERMINER || isNominal(next)
+                || next == ConjunctCandidateProposer.PREPOSITION;
+    }
+
+    /** Whether verb {@code k} is an auxiliary or modal with a verb of its own after it, before coordinator {@code c}. */
+    static boolean auxiliaryBeforeVerb(String[] w, byte[] kinds, int k, int c) {
+        if (!(kinds[k] == ConjunctCandidateProposer.MODAL || ConjunctCandidateProposer.isAuxiliary(w[k]))) return false;
+        int j = k + 1;
+        while (j < c && (kinds[j] == ConjunctCandidateProposer.ADVERB || kinds[j] == ConjunctCandidateProposer.MODAL)) j++;
+        return j < c && ConjunctCandidateProposer.isVerb(kinds[j]);
+    }
+
+    /** The preposition before the noun group of {@code k}: 1 "of", 2 another, 0 none. */
+    static int prepositionBefore(String[] w, byte[] kinds, int k) {
+        int j = ConjunctCandidateProposer.groupBegin(kinds, k) - 1;
+        if (j < 0 || !(kinds[j] == ConjunctCandidateProposer.PREPOSITION || kinds[j] == ConjunctCandidateProposer.TO)) return 0;
+        return w[j].equalsIgnoreCase("of") ? 1 : 2;
+    }
+
+    private static boolean ofAfter(String[] w, int k) {
+        return k + 1 < w.length && w[k + 1].equalsIgnoreCase("of");
+    }
+
+    /** Whether the last conjunct of {@code p} opens with a determiner or a possessive ("and the pumps", "and their seals"). */
+    private static boolean opensWithDeterminer(String[] t, ConjunctPair p) {
+        int b = p.rightBegin();
+        if (b < 0 || b >= t.length || b > p.right()) return false;
+        String tag = t[b];
+        return tag.equals("DT") || tag.equals("PDT") || tag.equals("PRP$") || tag.equals("WP$");
+    }
+
+    /** Whether a coordinator stands right before the first head's group (adverbs aside): "files and photos and ...". */
+    private static boolean afterCoordinator(byte[] kinds, ConjunctPair p) {
+        int j = (p.leftClass() == HeadClass.NOUN ? ConjunctCandidateProposer.groupBegin(kinds, p.left()) : p.left()) - 1;
+        while (j >= 0 && kinds[j] == ConjunctCandidateProposer.ADVERB) j--;
+        return j >= 0 && kinds[j] == ConjunctCandidateProposer.COORDINATOR;
+    }
+
+    private static boolean isNominal(byte kind) {
+        return kind == ConjunctCandidateProposer.NOUN || kind == ConjunctCandidateProposer.PROPER || kind == ConjunctCandidateProposer.PRONOUN
+                || kind == ConjunctCandidateProposer.NUMBER;
     }
 
     /** Words that open a subordinate or relative clause (distinct from the proposer's lists, which bound conjuncts). */

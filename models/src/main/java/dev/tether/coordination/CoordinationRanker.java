@@ -96,10 +96,14 @@ public final class CoordinationRanker {
     public List<Reason> explain(CoordinationQuery q, CoordinationChoice choice, int limit) {
         List<Reason> reasons = new ArrayList<>();
         if (choice.readings() < 2) return reasons;
+        return contrast(q, choice.pair(0), choice.pair(1), limit);
+    }
+
+    /** The features that weigh most for candidate pair {@code best} of {@code q} against pair {@code second}, at most {@code limit}. */
+    List<Reason> contrast(CoordinationQuery q, int best, int second, int limit) {
+        List<Reason> reasons = new ArrayList<>();
         CandidateFeatures f = new CandidateFeatures();
         extractor.extractPairs(q, f);
-        int best = choice.pair(0);
-        int second = choice.pair(1);
         java.util.TreeMap<Long, Double> pull = new java.util.TreeMap<>();
         for (int e = f.from(best); e < f.to(best); e++) pull.merge(f.key(e), pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);
         for (int e = f.from(second); e < f.to(second); e++) pull.merge(f.key(e), -pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);

@@ -16,11 +16,18 @@ import java.util.Map;
 /**
  * Trains only the coordination ranker from a treebank and scores it with gold tags on another (a development loop;
  * the figures of record come from {@code tether evaluate}). Run by hand with the models classpath:
- * {@code java -cp ... dev.tether.coordination.CoordinationDevMeasurement TRAIN DEV [THESAURUS]}.
+ * {@code java -cp ... dev.tether.coordination.CoordinationDevMeasurement TRAIN DEV [THESAURUS]}, or
+ * {@code ... CoordinationDevMeasurement TRAIN --folds K} for K-fold cross-validation on the training file alone (sentence
+ * {@code i} in fold {@code i mod K}), so that a change motivated by development-set errors is checked on text it was not
+ * written on.
  */
 public final class CoordinationDevMeasurement {
     public static void main(String[] args) throws Exception {
         List<TreebankSentence> train = ConlluReader.readAll(Path.of(args[0]));
+        if (args[1].equals("--folds")) {
+            folds(train, Integer.parseInt(args[2]));
+            return;
+        }
         List<TreebankSentence> dev = ConlluReader.readAll(Path.of(args[1]));
         long start = System.nanoTime();
         ModelTrainer trainer = new ModelTrainer().addCoordinationSentences(train);
@@ -45,6 +52,25 @@ public final class CoordinationDevMeasurement {
         }
     }
 
+    private static void folds(List<TreebankSentence> all, int k) {
+        CoordinationEvaluation total = new CoordinationEvaluation();
+        CoordinationGoldTagEvaluator evaluator = new CoordinationGoldTagEvaluator();
+        for (int fold = 0; fold < k; fold++) {
+            List<TreebankSentence> rest = new java.util.ArrayList<>();
+            List<TreebankSentence> held = new java.util.ArrayList<>();
+            for (int i = 0; i < all.size(); i++) (i % k == fold ? held : rest).add(all.get(i));
+            CoordinationRanker ranker = new ModelTrainer().addCoordinationSentences(rest).build().coordinationRanker().orElseThrow();
+            CoordinationEvaluation e = new CoordinationEvaluation();
+            for (TreebankSentence s : held) {
+                evaluator.add(s, ranker, e);
+                evaluator.add(s, ranker, total);
+            }
+            System.out.printf("fold %d: heads %s, nearest %s%n", fold, f(e.heads()), f(e.nearestOfClass()));
+        }
+        System.out.printf("all folds: heads %s, nearest %s, spans %s, scope %s%n", f(total.heads()), f(total.nearestOfClass()),
+                f(total.spans()), f(total.scope()));
+    }
+
     /** Prints the wrong head choices whose gold pair was among the candidates. */
     private static void show(TreebankSentence s, CoordinationRanker ranker) {
         java.util.Map<Integer, CoordinatorCandidates> by = new java.util.HashMap<>();
@@ -55,11 +81,23 @@ public final class CoordinationDevMeasurement {
             CoordinationChoice choice = ranker.choose(new CoordinationQuery(s.forms(), s.xposTags(), c), 1);
             ConjunctPair p = c.pair(choice.pair(0));
             if (p.left() == g.left() && p.right() == g.right()) continue;
-            StringBuilder b = new StringBuilder("WRONG gold " + s.form(g.left()) + "+" + s.form(g.right()) + " got " + s.form(p.left()) + "+" + s.form(p.right()) + " :: ");
+            String side = p.right() != g.right() ? (p.left() != g.left() ? "both" : "right")
+                    : p.left() < g.left() ? "too-far" : "too-near";
+            StringBuilder b = new StringBuilder("WRONG " + side + " gold " + s.form(g.left()) + "+" + s.form(g.right()) + " got " + s.form(p.left()) + "+" + s.form(p.right()) + " :: ");
             for (int k = Math.max(0, Math.min(g.left(), p.left()) - 2); k < Math.min(s.size(), Math.max(g.right(), p.right()) + 3); k++) {
                 b.append(s.form(k)).append('/').append(s.xpos(k)).append(' ');
             }
             System.out.println(b);
+            if (System.getenv("WHY") != null) {
+                for (CoordinationRanker.Reason r : ranker.contrast(new CoordinationQuery(s.forms(), s.xposTags(), c), choice.pair(0),
+                        c.indexOf(g.left(), g.right()), 6)) {
+                    System.out.printf("    %+.2f %s%n", r.weight(), r.text());
+                }
+                for (CoordinationRanker.Reason r : ranker.contrast(new CoordinationQuery(s.forms(), s.xposTags(), c),
+                        c.indexOf(g.left(), g.right()), choice.pair(0), 6)) {
+                    System.out.printf("    %+.2f %s%n", -r.weight(), r.text());
+                }
+            }
         }
     }
 
