@@ -26,7 +26,7 @@ public final class ConjunctCandidateProposer {
     /** First-conjunct heads of the last conjunct's class kept, nearest first. */
     public static final int MAX_SAME_CLASS = 8;
     /** First-conjunct heads kept of each other class. */
-    public static final int MAX_OTHER_CLASS = 2;
+    public static final int MAX_OTHER_CLASS = 3;
     /** Readings of the last conjunct's head kept. */
     public static final int MAX_RIGHT = 5;
     /** Tokens after the coordinator scanned for the last conjunct. */
@@ -255,8 +255,10 @@ public final class ConjunctCandidateProposer {
             }
         }
         if (last < 0) return new int[] {-1, 0};
-        // "there was no way": the existential "be" is the head.
-        boolean existential = v > 0 && kinds[v - 1] == EXISTENTIAL;
+        // "there was no way", "there still are": the existential "be" is the head.
+        int before = v - 1;
+        while (before > 0 && before > v - 3 && kinds[before] == ADVERB) before--;
+        boolean existential = before >= 0 && kinds[before] == EXISTENTIAL;
         if (!existential && isOneOf(words[last], FORMS_OF_BE) && last + 1 < n) {
             int p = last + 1;
             while (p < n && p < last + 4 && (kinds[p] == ADVERB || kinds[p] == DETERMINER && p + 1 < n && kinds[p + 1] == ADJECTIVE)) p++;
