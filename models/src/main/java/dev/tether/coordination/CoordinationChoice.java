@@ -11,8 +11,18 @@ public final class CoordinationChoice {
     private final double[] pairProbabilities;
     private final int[] order;
     private final double[][] shared;
+    /** The features that weigh most for the best reading against the runner-up; null until the ranker adds them. */
+    private final CoordinationRanker.Pulls pulls;
+
+    private CoordinationChoice(CoordinationChoice c, CoordinationRanker.Pulls pulls) {
+        this.pairProbabilities = c.pairProbabilities;
+        this.order = c.order;
+        this.shared = c.shared;
+        this.pulls = pulls;
+    }
 
     CoordinationChoice(double[] pairProbabilities, int[] order, double[][] shared) {
+        this.pulls = null;
         this.pairProbabilities = pairProbabilities;
         // The k readings, each its pair with its scope decisions, best first by the reading's probability (stable).
         int k = shared.length;
@@ -31,6 +41,13 @@ public final class CoordinationChoice {
             this.shared[r] = shared[byReading[r]];
         }
     }
+
+    /** This choice with the pulls behind its best reading, for the evidence. */
+    CoordinationChoice withPulls(CoordinationRanker.Pulls p) {
+        return new CoordinationChoice(this, p);
+    }
+
+    CoordinationRanker.Pulls pulls() { return pulls; }
 
     /** Number of readings ranked with their scope (at most the k asked for). */
     public int readings() { return shared.length; }

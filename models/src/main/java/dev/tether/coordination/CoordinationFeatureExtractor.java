@@ -55,8 +55,14 @@ public final class CoordinationFeatureExtractor {
         int c = cc.coordinator();
         int coordinator = CoordinationFeature.coordinator(w[c]);
         Vocabulary vocabulary = statistics.words();
+        // Word kinds, tag ids and lower-cased words, once per query (a window of at most a few hundred tokens at run time).
         byte[] kinds = new byte[t.length];
-        for (int k = 0; k < t.length; k++) kinds[k] = ConjunctCandidateProposer.kind(t[k]);
+        int[] tagIds = new int[t.length];
+        for (int k = 0; k < t.length; k++) {
+            kinds[k] = ConjunctCandidateProposer.kind(t[k]);
+            tagIds[k] = PennTags.id(t[k]);
+        }
+        String[] lower = new String[w.length];
         int[] rankOf = new int[HeadClass.values().length * ConjunctCandidateProposer.MAX_RIGHT];
         int lastRight = -2;
         int readingIndex = -1;
@@ -82,25 +88,25 @@ public final class CoordinationFeatureExtractor {
             int lc = p.leftClass().ordinal();
             int rc = p.rightClass().ordinal();
             int pairClass = lc * 4 + rc;
-            int lt = PennTags.id(t[p.left()]);
-            int rt = PennTags.id(t[p.right()]);
+            int lt = tagIds[p.left()];
+            int rt = tagIds[p.right()];
             int rank = rankOf[lc]++;
             if (on(CoordinationFeatureFamily.PARALLELISM)) {
                 out.add(CoordinationFeature.CLASS_PAIR.key(lc, rc, Math.min(readingIndex, 3)), 1);
                 out.add(CoordinationFeature.TAG_PAIR.key(lt, rt, 0), 1);
                 if (lt == rt) out.add(CoordinationFeature.SAME_TAG.key(0, 0, lc), 1);
                 out.add(CoordinationFeature.TAG_SEQUENCE_OVERLAP.key(0, 0, pairClass),
-                        tagOverlap(t, p.leftBegin(), p.leftEnd(), p.rightBegin(), p.rightEnd()));
+                        tagOverlap(tagIds, p.leftBegin(), p.leftEnd(), p.rightBegin(), p.rightEnd()));
                 out.add(CoordinationFeature.LENGTHS.key(lengthBucket(p.leftEnd() - p.leftBegin() + 1),
                         lengthBucket(p.rightEnd() - p.rightBegin() + 1), pairClass), 1);
-                String lw = w[p.left()].toLowerCase(java.util.Locale.ROOT);
-                String rw = w[p.right()].toLowerCase(java.util.Locale.ROOT);
+                String lw = lowerCase(w, lower, p.left());
+                String rw = lowerCase(w, lower, p.right());
                 if (lw.length() > 3 && rw.length() > 3 && lw.regionMatches(lw.length() - 3, rw, rw.length() - 3, 3)) {
                     out.add(CoordinationFeature.SAME_SUFFIX.key(0, 0, pairClass), 1);
                 }
                 if (lw.equals(rw)) out.add(CoordinationFeature.SAME_WORD.key(0, 0, pairClass), 1);
-                int leftPrevious = p.left() > 0 ? PennTags.id(t[p.left() - 1]) : 0;
-                int rightPrevious = PennTags.id(t[p.right() - 1]);
+                int leftPrevious = p.left() > 0 ? tagIds[p.left() - 1] : 0;
+                int rightPrevious = tagIds[p.right() - 1];
                 out.add(CoordinationFeature.PREVIOUS_TAGS.key(leftPrevious, rightPrevious, pairClass), 1);
                 if (p.rightClass() == HeadClass.NOUN) {
                     boolean groupEnd = p.right() + 1 >= w.length || !isNominal(kinds[p.right() + 1]);
@@ -165,10 +171,10 @@ public final class CoordinationFeatureExtractor {
                     out.add(CoordinationFeature.LEFT_SUBORDINATE.key(p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right()) ? 1 : 0, 0, pairClass), 1);
                 }
                 int before = p.leftBegin() - 1;
-                out.add(CoordinationFeature.LEFT_CONTEXT.key(before >= 0 ? PennTags.id(t[before]) : 0, 0, pairClass), 1);
-                int leftNext = p.left() + 1 < w.length ? PennTags.id(t[p.left() + 1]) : 0;
+                out.add(CoordinationFeature.LEFT_CONTEXT.key(before >= 0 ? tagIds[before] : 0, 0, pairClass), 1);
+                int leftNext = p.left() + 1 < w.length ? tagIds[p.left() + 1] : 0;
                 out.add(CoordinationFeature.LEFT_NEXT_TAG.key(leftNext, 0, pairClass), 1);
-                int rightNext = p.right() + 1 < w.length ? PennTags.id(t[p.right() + 1]) : 0;
+                int rightNext = p.right() + 1 < w.length ? tagIds[p.right() + 1] : 0;
                 out.add(CoordinationFeature.RIGHT_NEXT_TAG.key(rightNext, 0, pairClass), 1);
                 if (p.leftClass() == HeadClass.VERB && auxiliaryBeforeVerb(w, kinds, p.left(), c)) {
                     out.add(CoordinationFeature.LEFT_AUXILIARY.key(0, 0, pairClass), 1);
@@ -296,6 +302,13 @@ public final class CoordinationFeatureExtractor {
         byte next = kinds[p];
         return next == ConjunctCandidateProposer.ADJECTIVE || next == ConjunctCandidateProposer.DETERMINER || isNominal(next)
                 || next == ConjunctCandidateProposer.PREPOSITION;
+    }
+
+    /** Token {@code k} lower-cased, computed once per query. */
+    private static String lowerCase(String[] w, String[] lower, int k) {
+        String s = lower[k];
+        if (s == null) lower[k] = s = w[k].toLowerCase(java.util.Locale.ROOT);
+        return s;
     }
 
     /** Whether verb {@code k} is an auxiliary or modal with a verb of its own after it, before coordinator {@code c}. */
@@ -475,10 +488,10 @@ public final class CoordinationFeatureExtractor {
     }
 
     /** Share of the left conjunct's tag bigrams that the right conjunct has too (Dice over bigram sets). */
-    static double tagOverlap(String[] t, int lb, int le, int rb, int re) {
+    static double tagOverlap(int[] t, int lb, int le, int rb, int re) {
         long[] left = bigrams(t, lb, le);
         long[] right = bigrams(t, rb, re);
-        if (left.length == 0 && right.length == 0) return t[lb].equals(t[rb]) ? 1 : 0;
+        if (left.length == 0 && right.length == 0) return t[lb] == t[rb] ? 1 : 0;
         int common = 0;
         for (int i = 0, j = 0; i < left.length && j < right.length; ) {
             if (left[i] == right[j]) {
@@ -495,12 +508,12 @@ public final class CoordinationFeatureExtractor {
     }
 
     /** The distinct tag bigrams of tokens {@code from..to} (at most 20 counted), sorted. */
-    private static long[] bigrams(String[] t, int from, int to) {
+    private static long[] bigrams(int[] t, int from, int to) {
         int start = Math.max(0, from);
         int end = Math.min(Math.min(to, t.length - 1), from + 20);
         if (end <= start) return new long[0];
         long[] b = new long[end - start];
-        for (int k = start; k < end; k++) b[k - start] = (long) PennTags.id(t[k]) << 32 | PennTags.id(t[k + 1]);
+        for (int k = start; k < end; k++) b[k - start] = (long) t[k] << 32 | t[k + 1];
         java.util.Arrays.sort(b);
         int distinct = 1;
         for (int k = 1; k < b.length; k++) if (b[k] != b[distinct - 1]) b[distinct++] = b[k];

@@ -1,9 +1,11 @@
 package dev.tether.coordination;
 
+
 import dev.tether.ranking.CandidateFeatures;
 import dev.tether.ranking.RankerModel;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.vocabulary.WordNormalizer;
+import gnu.trove.map.hash.TLongDoubleHashMap;
 
 import java.io.DataInput;
 import java.io.DataOutput;
@@ -19,7 +21,8 @@ import java.util.Set;
  * shared" for each modifier around the chosen pair. Features come from {@link CoordinationFeatureExtractor} over the
  * model's coordination counts and, when one is given, a thesaurus ({@link #withThesaurus}; without one the
  * similarity features are absent, and a ranker trained without one never weighs them). Immutable and thread-safe
- * (one reusable feature buffer per thread).
+ * (two reusable feature buffers per thread: pair features, which {@link #choose} keeps until it has weighed the best
+ * reading against the runner-up for the evidence, and scope features).
  */
 public final class CoordinationRanker {
     /** Version of the stored ranker (templates and layout); a model with another writes no coordination decisions. */
@@ -31,7 +34,11 @@ public final class CoordinationRanker {
     private final CoordinationCounts counts;
     private final Thesaurus thesaurus;
     private final CoordinationFeatureExtractor extractor;
+    /** Feature pulls kept with each choice for its evidence, strongest first ({@link #explain} asks for three). */
+    static final int EXPLAINED = 6;
+
     private final ThreadLocal<CandidateFeatures> buffers = ThreadLocal.withInitial(CandidateFeatures::new);
+    private final ThreadLocal<CandidateFeatures> scopeBuffers = ThreadLocal.withInitial(CandidateFeatures::new);
 
     public CoordinationRanker(RankerModel pairWeights, RankerModel scopeWeights, Set<CoordinationFeatureFamily> families,
                               CoordinationCounts counts, Thesaurus thesaurus) {
@@ -54,11 +61,15 @@ public final class CoordinationRanker {
     public Set<CoordinationFeatureFamily> families() { return EnumSet.copyOf(families); }
     public boolean hasThesaurus() { return thesaurus != null; }
 
-    /** Ranks the pairs of {@code q} and decides the scope of the modifiers of the best {@code k}. */
+    /**
+     * Ranks the pairs of {@code q} and decides the scope of the modifiers of the best {@code k}; the choice keeps the
+     * features that weigh most for its best reading against the runner-up ({@link #explain}).
+     */
     public CoordinationChoice choose(CoordinationQuery q, int k) {
         CoordinatorCandidates cc = q.candidates();
         if (cc.size() == 0) throw new IllegalArgumentException("no candidate conjuncts for the coordinator at token " + cc.coordinator());
         CandidateFeatures f = buffers.get();
+        CandidateFeatures scope = scopeBuffers.get();
         extractor.extractPairs(q, f);
         double[] p = new double[cc.size()];
         pairWeights.probabilities(f, p);
@@ -70,12 +81,14 @@ public final class CoordinationRanker {
             ConjunctPair pair = cc.pair(order[r]);
             shared[r] = new double[pair.modifiers().length];
             for (int m = 0; m < shared[r].length; m++) {
-                extractor.extractScope(q, pair, pair.modifiers()[m], f);
-                scopeWeights.probabilities(f, two);
+                extractor.extractScope(q, pair, pair.modifiers()[m], scope);
+                scopeWeights.probabilities(scope, two);
                 shared[r][m] = two[1];
             }
         }
-        return new CoordinationChoice(p, order, shared);
+        CoordinationChoice choice = new CoordinationChoice(p, order, shared);
+        if (choice.readings() < 2) return choice;
+        return choice.withPulls(pulls(f, choice.pair(0), choice.pair(1), EXPLAINED));
     }
 
     /** Candidate indexes by descending probability; ties keep candidate order (nearest first). */
@@ -94,26 +107,65 @@ public final class CoordinationRanker {
 
     /** The features that weighed most for the best pair of {@code choice} against its runner-up, at most {@code limit}. */
     public List<Reason> explain(CoordinationQuery q, CoordinationChoice choice, int limit) {
-        List<Reason> reasons = new ArrayList<>();
-        if (choice.readings() < 2) return reasons;
+        if (choice.readings() < 2) return new ArrayList<>();
+        Pulls kept = choice.pulls();
+        if (kept != null && (limit <= kept.keys.length || kept.complete)) return kept.reasons(limit);
         return contrast(q, choice.pair(0), choice.pair(1), limit);
     }
 
     /** The features that weigh most for candidate pair {@code best} of {@code q} against pair {@code second}, at most {@code limit}. */
     List<Reason> contrast(CoordinationQuery q, int best, int second, int limit) {
-        List<Reason> reasons = new ArrayList<>();
         CandidateFeatures f = new CandidateFeatures();
         extractor.extractPairs(q, f);
-        java.util.TreeMap<Long, Double> pull = new java.util.TreeMap<>();
-        for (int e = f.from(best); e < f.to(best); e++) pull.merge(f.key(e), pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);
-        for (int e = f.from(second); e < f.to(second); e++) pull.merge(f.key(e), -pairWeights.weightOf(f.key(e)) * f.value(e), Double::sum);
-        List<java.util.Map.Entry<Long, Double>> entries = new ArrayList<>(pull.entrySet());
-        entries.sort((a, b) -> Double.compare(b.getValue(), a.getValue()));
-        for (java.util.Map.Entry<Long, Double> e : entries) {
-            if (reasons.size() == limit || e.getValue() <= 1e-9) break;
-            reasons.add(new Reason(CoordinationFeature.of(e.getKey()).describe(e.getKey()), e.getValue()));
+        return pulls(f, best, second, limit).reasons(limit);
+    }
+
+    /**
+     * The strongest positive pulls towards candidate {@code best} against {@code second}, at most {@code limit}: each
+     * feature's weight times its value for the best pair, less the same for the other. Ties go to the lower key, so the
+     * evidence reads the same on every run.
+     */
+    Pulls pulls(CandidateFeatures f, int best, int second, int limit) {
+        TLongDoubleHashMap pull = new TLongDoubleHashMap(2 * (f.to(best) - f.from(best) + f.to(second) - f.from(second)) + 1);
+        for (int e = f.from(best); e < f.to(best); e++) {
+            double v = pairWeights.weightOf(f.key(e)) * f.value(e);
+            pull.adjustOrPutValue(f.key(e), v, v);
         }
-        return reasons;
+        for (int e = f.from(second); e < f.to(second); e++) {
+            double v = -pairWeights.weightOf(f.key(e)) * f.value(e);
+            pull.adjustOrPutValue(f.key(e), v, v);
+        }
+        long[] keys = pull.keys();
+        double[] values = new double[keys.length];
+        for (int i = 0; i < keys.length; i++) values[i] = pull.get(keys[i]);
+        long[] topKeys = new long[Math.min(limit, keys.length)];
+        double[] topValues = new double[topKeys.length];
+        boolean[] taken = new boolean[keys.length];
+        int found = 0;
+        while (found < topKeys.length) {
+            int top = -1;
+            for (int i = 0; i < keys.length; i++) {
+                if (taken[i] || values[i] <= 1e-9) continue;
+                if (top < 0 || values[i] > values[top] || values[i] == values[top] && keys[i] < keys[top]) top = i;
+            }
+            if (top < 0) break;
+            taken[top] = true;
+            topKeys[found] = keys[top];
+            topValues[found++] = values[top];
+        }
+        boolean complete = found < topKeys.length || found == keys.length;
+        return new Pulls(java.util.Arrays.copyOf(topKeys, found), java.util.Arrays.copyOf(topValues, found), complete);
+    }
+
+    /** Features with their pulls, strongest first; {@code complete} when no other feature pulls that way. */
+    record Pulls(long[] keys, double[] values, boolean complete) {
+        List<Reason> reasons(int limit) {
+            List<Reason> reasons = new ArrayList<>(Math.min(limit, keys.length));
+            for (int i = 0; i < keys.length && i < limit; i++) {
+                reasons.add(new Reason(CoordinationFeature.of(keys[i]).describe(keys[i]), values[i]));
+            }
+            return reasons;
+        }
     }
 
     public static void write(CoordinationRanker r, DataOutput out) throws IOException {
