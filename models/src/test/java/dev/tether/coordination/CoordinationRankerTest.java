@@ -49,6 +49,23 @@ class CoordinationRankerTest {
     }
 
     @Test
+    void theEvidenceKeptByChooseIsWhatWeighingThePairsAgainGives() throws Exception {
+        CoordinationRanker ranker = new ModelTrainer().addCoordinationSentences(repeated()).build().coordinationRanker().orElseThrow();
+        TaggedWords s = TaggedWords.of("The/DT crew/NN inspected/VBD the/DT hull/NN and/CC replaced/VBD the/DT anodes/NNS ./.");
+        CoordinatorCandidates c = new ConjunctCandidateProposer().proposeAll(s.words, s.tags).get(0);
+        CoordinationQuery q = new CoordinationQuery(s.words, s.tags, c);
+        CoordinationChoice choice = ranker.choose(q, 3);
+        for (int limit : new int[] {1, 3, CoordinationRanker.EXPLAINED, CoordinationRanker.EXPLAINED + 4}) {
+            List<CoordinationRanker.Reason> kept = ranker.explain(q, choice, limit);
+            List<CoordinationRanker.Reason> again = ranker.contrast(q, choice.pair(0), choice.pair(1), limit);
+            assertEquals(again, kept, "limit " + limit);
+            assertTrue(kept.size() <= limit);
+            for (int i = 1; i < kept.size(); i++) assertTrue(kept.get(i - 1).weight() >= kept.get(i).weight(), "strongest first");
+        }
+        assertFalse(ranker.explain(q, choice, 3).isEmpty(), "the chosen reading has features that pull for it");
+    }
+
+    @Test
     void trainingTwiceGivesTheSameModelBytes(@TempDir Path dir) throws Exception {
         TetherModel a = new ModelTrainer().addCoordinationSentences(repeated()).build();
         TetherModel b = new ModelTrainer().addCoordinationSentences(repeated()).build();
