@@ -25,8 +25,19 @@ import java.util.Set;
  * reading against the runner-up for the evidence, and scope features).
  */
 public final class CoordinationRanker {
-    /** Version of the stored ranker (templates and layout); a model with another writes no coordination decisions. */
-    public static final int VERSION = 1;
+    /**
+     * Version of the stored ranker (templates and layout); a model with a version this build does not read writes no
+     * coordination decisions. 2 added templates after those of 1 (clause roles, conjunct shape, tags before the heads),
+     * so a build that reads 2 reads 1 too, and a build that reads only 1 leaves a version-2 ranker out.
+     */
+    public static final int VERSION = 2;
+    /** The oldest stored version this build reads. */
+    public static final int OLDEST_READABLE = 1;
+
+    /** Whether this build reads a stored ranker of {@code version}. */
+    public static boolean reads(int version) {
+        return version >= OLDEST_READABLE && version <= VERSION;
+    }
 
     private final RankerModel pairWeights;
     private final RankerModel scopeWeights;
@@ -179,7 +190,9 @@ public final class CoordinationRanker {
     /** What {@link #write} wrote; the version is checked by the caller ({@link #readVersion}). */
     public static CoordinationRanker read(DataInput in) throws IOException {
         int version = in.readInt();
-        if (version != VERSION) throw new IOException("coordination ranker version " + version + ", this build reads " + VERSION);
+        if (!reads(version)) {
+            throw new IOException("coordination ranker version " + version + ", this build reads " + OLDEST_READABLE + " to " + VERSION);
+        }
         Set<CoordinationFeatureFamily> families = CoordinationFeatureFamily.fromMask(in.readInt());
         CoordinationCounts counts = CoordinationCounts.read(in);
         RankerModel pairs = RankerModel.read(in);

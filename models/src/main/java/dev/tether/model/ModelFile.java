@@ -239,13 +239,13 @@ public final class ModelFile {
             byte[] coordinationBytes = sections.get(COORDINATION_RANKER);
             if (coordinationBytes != null) {
                 int version = CoordinationRanker.readVersion(coordinationBytes);
-                if (version == CoordinationRanker.VERSION) {
+                if (CoordinationRanker.reads(version)) {
                     coordination = CoordinationRanker.read(new DataInputStream(new ByteArrayInputStream(coordinationBytes)));
                 } else {
                     // A coordination ranker of another version is left out rather than refusing the whole model:
                     // attachment still works, and engines say that no coordination decisions are written.
-                    LOG.warning(name + " has a coordination ranker of version " + version + "; this build reads version "
-                            + CoordinationRanker.VERSION + ", so the model makes no coordination decisions. Retrain it "
+                    LOG.warning(name + " has a coordination ranker of version " + version + "; this build reads versions "
+                            + CoordinationRanker.OLDEST_READABLE + " to " + CoordinationRanker.VERSION + ", so the model makes no coordination decisions. Retrain it "
                             + "with 'tether train --conllu' to get them.");
                 }
             }
