@@ -55,7 +55,7 @@ class EwtDevSliceEndToEndTest {
     }
 
     /*
-     * Floors. Measured with the shipped default model and its learned ranker (December 2026, model 86d57686ce19, whose attachment
+     * Floors. Measured with the shipped default model and its learned ranker (December 2026, model 5d7066160f60, whose attachment
      * ranker is be8ffe111ee2's):
      * attachment 442 of 547 = 0.808 (Wilson 95% interval 0.773-0.839); in the same run the count-based score the
      * ranker replaced 425 = 0.777, nearest noun-or-verb 340 = 0.622, verb-or-first-noun 346 = 0.633, candidate recall
@@ -129,7 +129,7 @@ class EwtDevSliceEndToEndTest {
 
     /*
      * Coordination scope on the same run (the coordination resolver is in the raw-text pipeline). Measured with the
-     * shipped default model 86d57686ce19 (December 2026): 180 gold coordinations in the slice (a cc whose head is a
+     * shipped default model 5d7066160f60 (December 2026): 180 gold coordinations in the slice (a cc whose head is a
      * conj); both conjunct heads right for 110 = 0.611 (Wilson 95% interval 0.538-0.679); the nearest word before the
      * coordinator with the last conjunct's class (as the pipeline tagged it), same run, 74 = 0.411. Scope decisions on
      * the gold modifiers the pipeline decided: 77 of 79 right, against never-shared 60 = 0.759 and always-shared 0.241.
