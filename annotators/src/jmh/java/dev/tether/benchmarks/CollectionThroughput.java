@@ -105,7 +105,7 @@ public class CollectionThroughput {
         AnalysisEngineDescription pipeline = AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class,
                         TextPreprocessor.PARAM_MODEL, taggerlessModel.toString(), TextPreprocessor.PARAM_CHUNK, true,
-                        TextPreprocessor.PARAM_LIBRARY_TAGGER, true),
+                        TextPreprocessor.PARAM_LIBRARY_TAGGER, true, TextPreprocessor.PARAM_LIBRARY_TOKENIZER, true),
                 TetherPipeline.resolution("default"));
         return annotate(1, pipeline, true).decisions();
     }

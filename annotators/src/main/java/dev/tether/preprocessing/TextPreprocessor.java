@@ -26,7 +26,6 @@ import opennlp.tools.postag.POSModel;
 import opennlp.tools.postag.POSTagFormat;
 import opennlp.tools.postag.POSTaggerME;
 import opennlp.tools.sentdetect.SentenceDetectorME;
-import opennlp.tools.tokenize.TokenizerME;
 import opennlp.tools.util.Span;
 
 /**
@@ -87,13 +86,21 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     @ConfigurationParameter(name = PARAM_LIBRARY_TAGGER, mandatory = true, defaultValue = "false")
     private boolean libraryTagger;
 
+    /**
+     * Tokenize with OpenNLP's own {@code TokenizerME} instead of {@link MemoizedTokenizer}, which gives the same spans at
+     * less cost; for comparison.
+     */
+    public static final String PARAM_LIBRARY_TOKENIZER = "libraryTokenizer";
+    @ConfigurationParameter(name = PARAM_LIBRARY_TOKENIZER, mandatory = true, defaultValue = "false")
+    private boolean libraryTokenizer;
+
     /** Key of the optional shared model resource ({@link ModelHolder}), the same one the resolver binds. */
     public static final String RES_MODEL = "sharedModel";
     @ExternalResource(key = RES_MODEL, mandatory = false)
     private ModelHolder sharedModel;
 
     private SentenceDetectorME sentenceDetector;
-    private TokenizerME tokenizer;
+    private java.util.function.Function<String, Span[]> tokenizer;
     private UnaryOperator<String[]> tagger;
     private ChunkerME chunker;
 
@@ -128,7 +135,9 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
                     "cannot set up the tagger of the model given by parameter " + PARAM_MODEL + ": " + e.getMessage()}, e);
         }
         sentenceDetector = new SentenceDetectorME(models.sentenceModel());
-        tokenizer = new TokenizerME(models.tokenizerModel());
+        // OpenNLP's tokenizer, each distinct white-space token asked once (the same spans; see MemoizedTokenizer).
+        tokenizer = libraryTokenizer ? new opennlp.tools.tokenize.TokenizerME(models.tokenizerModel())::tokenizePos
+                : new MemoizedTokenizer(models.tokenizerModel())::tokenizePos;
         // The model's own Penn Treebank tags, as OpenNLP's POSTaggerME gives them with POSTagFormat.PENN (its default
         // maps them to Universal Dependencies tags, which the 1.5 chunker model was not trained on), decoded at less cost.
         if (libraryTagger || !MemoizedBeamTagger.decodes(posModel)) {
@@ -149,7 +158,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         }
         for (Span sentence : CodePointSpans.align(sentenceDetector.sentPosDetect(text), text)) {
             String sentenceText = sentence.getCoveredText(text).toString();
-            Span[] tokens = CodePointSpans.align(tokenizer.tokenizePos(sentenceText), sentenceText);
+            Span[] tokens = CodePointSpans.align(tokenizer.apply(sentenceText), sentenceText);
             if (tokens.length == 0) {
                 continue;
             }
