@@ -269,7 +269,7 @@ public final class CoordinationFeatureExtractor {
 
     /**
      * How the first head {@code k} predicates a clause: 1 a verb, 2 a noun or adjective after a copula ("were all
-     * American citizens"), 3 a copula itself (a form of "be" before its predicate, which UD makes the head), 0 none.
+     * American citizens"), 3 a copula itself (a form of "be" before its predicate; UD makes the predicate the head), 0 none.
      */
     static int leftPredicate(String[] w, byte[] kinds, int k) {
         byte kind = kinds[k];

@@ -46,6 +46,19 @@ class ConjunctCandidateProposerTest {
     }
 
     @Test
+    void anExistentialBeAfterAnAdverbHeadsItsClauseAndAnInformalBeIsACopula() {
+        // UD makes an existential "be" the head of its clause, and the predicate, not the copula, the head of a
+        // copular clause (https://universaldependencies.org/u/dep/expl.html, .../u/dep/cop.html).
+        TaggedWords there = TaggedWords.of("The/DT pump/NN leaked/VBD and/CC there/EX still/RB are/VBP loose/JJ bolts/NNS ./.");
+        CoordinatorCandidates c = proposer.proposeAll(there.words, there.tags).get(0);
+        assertTrue(c.indexOf(there.index("leaked"), there.index("are")) >= 0, "the existential 'are' is a reading");
+        assertTrue(c.indexOf(there.index("leaked"), there.index("bolts")) < 0, "its noun is not the clause's head");
+        TaggedWords informal = TaggedWords.of("the/DT belt/NN slipped/VBD and/CC it/PRP s/VBZ loose/JJ now/RB");
+        CoordinatorCandidates d = proposer.proposeAll(informal.words, informal.tags).get(0);
+        assertTrue(d.indexOf(informal.index("slipped"), informal.index("loose")) >= 0, "the predicate after 's' is a reading");
+    }
+
+    @Test
     void aCoordinatorAtEitherEndOfTheSentenceGetsNoCandidates() {
         TaggedWords start = TaggedWords.of("And/CC the/DT ramp/NN jammed/VBD");
         TaggedWords end = TaggedWords.of("Check/VB the/DT ramp/NN and/CC");
