@@ -16,7 +16,7 @@ import java.util.Set;
  * choice of conjunct heads, one sparse vector per candidate pair; for the scope of a modifier, two candidates, "not
  * shared" (no features: the reference) and "shared". Counts come from {@code statistics} (at training, the counts of
  * the other folds); the thesaurus is optional: without one the similarity and composition families give nothing.
- * Immutable and thread-safe.
+ * Immutable and thread-safe (each thread keeps the codes of the last sentence it was asked about).
  */
 public final class CoordinationFeatureExtractor {
     private static final double CLIP = 8;
@@ -46,6 +46,37 @@ public final class CoordinationFeatureExtractor {
 
     private boolean on(CoordinationFeatureFamily f) { return on[f.ordinal()]; }
 
+    /**
+     * Word kinds, tag ids and lower-cased words (filled as asked for) of one sentence. The coordinators of a sentence
+     * come as queries over the same arrays (which callers must not change, {@link CoordinationQuery}), so they share
+     * these, and the work per sentence stays linear in its length however many coordinators it has.
+     */
+    private static final class SentenceCodes {
+        String[] words;
+        String[] tags;
+        byte[] kinds;
+        int[] tagIds;
+        String[] lower;
+    }
+
+    private final ThreadLocal<SentenceCodes> sentenceCodes = ThreadLocal.withInitial(SentenceCodes::new);
+
+    private SentenceCodes codesOf(String[] w, String[] t) {
+        SentenceCodes c = sentenceCodes.get();
+        if (c.words != w || c.tags != t) {
+            c.words = w;
+            c.tags = t;
+            c.kinds = new byte[t.length];
+            c.tagIds = new int[t.length];
+            for (int k = 0; k < t.length; k++) {
+                c.kinds[k] = ConjunctCandidateProposer.kind(t[k]);
+                c.tagIds[k] = PennTags.id(t[k]);
+            }
+            c.lower = new String[w.length];
+        }
+        return c;
+    }
+
     /** Fills {@code out} with one candidate per pair of {@code q}. */
     public void extractPairs(CoordinationQuery q, CandidateFeatures out) {
         out.reset();
@@ -55,14 +86,10 @@ public final class CoordinationFeatureExtractor {
         int c = cc.coordinator();
         int coordinator = CoordinationFeature.coordinator(w[c]);
         Vocabulary vocabulary = statistics.words();
-        // Word kinds, tag ids and lower-cased words, once per query (a window of at most a few hundred tokens at run time).
-        byte[] kinds = new byte[t.length];
-        int[] tagIds = new int[t.length];
-        for (int k = 0; k < t.length; k++) {
-            kinds[k] = ConjunctCandidateProposer.kind(t[k]);
-            tagIds[k] = PennTags.id(t[k]);
-        }
-        String[] lower = new String[w.length];
+        SentenceCodes codes = codesOf(w, t);
+        byte[] kinds = codes.kinds;
+        int[] tagIds = codes.tagIds;
+        String[] lower = codes.lower;
         int[] rankOf = new int[HeadClass.values().length * ConjunctCandidateProposer.MAX_RIGHT];
         int lastRight = -2;
         int readingIndex = -1;
@@ -304,7 +331,7 @@ public final class CoordinationFeatureExtractor {
                 || next == ConjunctCandidateProposer.PREPOSITION;
     }
 
-    /** Token {@code k} lower-cased, computed once per query. */
+    /** Token {@code k} lower-cased, computed once per sentence. */
     private static String lowerCase(String[] w, String[] lower, int k) {
         String s = lower[k];
         if (s == null) lower[k] = s = w[k].toLowerCase(java.util.Locale.ROOT);

@@ -83,6 +83,24 @@ class CoordinationRankerTest {
     }
 
     @Test
+    void aSentenceScoresTheSameWhetherItsCodesAreFreshOrKeptFromTheQueryBefore() throws Exception {
+        CoordinationRanker ranker = new ModelTrainer().addCoordinationSentences(repeated()).build().coordinationRanker().orElseThrow();
+        TaggedWords a = TaggedWords.of("The/DT crew/NN inspected/VBD the/DT hull/NN and/CC replaced/VBD the/DT anodes/NNS and/CC seals/NNS ./.");
+        TaggedWords b = TaggedWords.of("Worn/JJ bearings/NNS and/CC seals/NNS were/VBD logged/VBN ./.");
+        List<CoordinatorCandidates> ca = new ConjunctCandidateProposer().proposeAll(a.words, a.tags);
+        CoordinatorCandidates cb = new ConjunctCandidateProposer().proposeAll(b.words, b.tags).get(0);
+        double first = ranker.choose(new CoordinationQuery(a.words, a.tags, ca.get(1)), 2).pairProbability(0);
+        ranker.choose(new CoordinationQuery(b.words, b.tags, cb), 2);
+        // The same sentence again, its codes kept from the query before on this thread ...
+        ranker.choose(new CoordinationQuery(a.words, a.tags, ca.get(0)), 2);
+        double kept = ranker.choose(new CoordinationQuery(a.words, a.tags, ca.get(1)), 2).pairProbability(0);
+        // ... and as fresh arrays with the same words.
+        double fresh = ranker.choose(new CoordinationQuery(a.words.clone(), a.tags.clone(), ca.get(1)), 2).pairProbability(0);
+        assertEquals(first, kept, 0.0);
+        assertEquals(first, fresh, 0.0);
+    }
+
+    @Test
     void trainingTwiceGivesTheSameModelBytes(@TempDir Path dir) throws Exception {
         TetherModel a = new ModelTrainer().addCoordinationSentences(repeated()).build();
         TetherModel b = new ModelTrainer().addCoordinationSentences(repeated()).build();
