@@ -1,6 +1,7 @@
 package dev.tether.preprocessing;
 
 import java.io.IOException;
+import java.util.function.Function;
 import java.util.function.UnaryOperator;
 
 import org.apache.uima.UimaContext;
@@ -26,6 +27,7 @@ import opennlp.tools.postag.POSModel;
 import opennlp.tools.postag.POSTagFormat;
 import opennlp.tools.postag.POSTaggerME;
 import opennlp.tools.sentdetect.SentenceDetectorME;
+import opennlp.tools.tokenize.TokenizerME;
 import opennlp.tools.util.Span;
 
 /**
@@ -100,7 +102,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     private ModelHolder sharedModel;
 
     private SentenceDetectorME sentenceDetector;
-    private java.util.function.Function<String, Span[]> tokenizer;
+    private Function<String, Span[]> tokenizer;
     private UnaryOperator<String[]> tagger;
     private ChunkerME chunker;
 
@@ -136,7 +138,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         }
         sentenceDetector = new SentenceDetectorME(models.sentenceModel());
         // OpenNLP's tokenizer, each distinct white-space token asked once (the same spans; see MemoizedTokenizer).
-        tokenizer = libraryTokenizer ? new opennlp.tools.tokenize.TokenizerME(models.tokenizerModel())::tokenizePos
+        tokenizer = libraryTokenizer ? new TokenizerME(models.tokenizerModel())::tokenizePos
                 : new MemoizedTokenizer(models.tokenizerModel())::tokenizePos;
         // The model's own Penn Treebank tags, as OpenNLP's POSTaggerME gives them with POSTagFormat.PENN (its default
         // maps them to Universal Dependencies tags, which the 1.5 chunker model was not trained on), decoded at less cost.

@@ -443,7 +443,7 @@ public final class ConjunctCandidateProposer {
         return kinds[k] == VERB;
     }
 
-    private static boolean isNounish(byte kind) {
+    static boolean isNounish(byte kind) {
         return kind == NOUN || kind == PROPER || kind == PRONOUN || kind == NUMBER;
     }
 

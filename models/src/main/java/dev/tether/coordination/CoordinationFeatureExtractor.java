@@ -118,6 +118,8 @@ public final class CoordinationFeatureExtractor {
             int lt = tagIds[p.left()];
             int rt = tagIds[p.right()];
             int rank = rankOf[lc]++;
+            boolean rightClause = p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right());
+            boolean rightDeterminer = opensWithDeterminer(t, p);
             if (on(CoordinationFeatureFamily.PARALLELISM)) {
                 out.add(CoordinationFeature.CLASS_PAIR.key(lc, rc, Math.min(readingIndex, 3)), 1);
                 out.add(CoordinationFeature.TAG_PAIR.key(lt, rt, 0), 1);
@@ -136,8 +138,8 @@ public final class CoordinationFeatureExtractor {
                 int rightPrevious = tagIds[p.right() - 1];
                 out.add(CoordinationFeature.PREVIOUS_TAGS.key(leftPrevious, rightPrevious, pairClass), 1);
                 if (p.rightClass() == HeadClass.NOUN) {
-                    boolean groupEnd = p.right() + 1 >= w.length || !isNominal(kinds[p.right() + 1]);
-                    out.add(CoordinationFeature.RIGHT_SHAPE.key((opensWithDeterminer(t, p) ? 2 : 0) + (groupEnd ? 1 : 0), 0, pairClass), 1);
+                    boolean groupEnd = p.right() + 1 >= w.length || !ConjunctCandidateProposer.isNounish(kinds[p.right() + 1]);
+                    out.add(CoordinationFeature.RIGHT_SHAPE.key((rightDeterminer ? 2 : 0) + (groupEnd ? 1 : 0), 0, pairClass), 1);
                 }
             }
             int li = vocabulary.id(keys.key(w[p.left()], t[p.left()]));
@@ -155,8 +157,7 @@ public final class CoordinationFeatureExtractor {
                 out.add(CoordinationFeature.RANK.key(Math.min(rank, 3), lc == rc ? 1 : 0, pairClass), 1);
                 int fromStart = classCount[readingOf[i] * 4 + lc] - rank - 1;
                 out.add(CoordinationFeature.RANK_FROM_START.key(Math.min(fromStart, 2), lc == rc ? 1 : 0, pairClass), 1);
-                boolean clause = p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right());
-                out.add(CoordinationFeature.CLAUSE_RANK_FROM_START.key(Math.min(fromStart, 2), clause ? 1 : 0, pairClass), 1);
+                out.add(CoordinationFeature.CLAUSE_RANK_FROM_START.key(Math.min(fromStart, 2), rightClause ? 1 : 0, pairClass), 1);
                 boolean groupEnd = p.left() + 1 >= w.length || ConjunctCandidateProposer.classOfTag(t[p.left() + 1]) != HeadClass.NOUN;
                 if (groupEnd) out.add(CoordinationFeature.GROUP_END.key(0, 0, lc), 1);
                 int verbs = 0;
@@ -191,11 +192,11 @@ public final class CoordinationFeatureExtractor {
             }
             if (on(CoordinationFeatureFamily.STRUCTURE)) {
                 out.add(CoordinationFeature.COORDINATOR.key(coordinator, 0, pairClass), 1);
-                if (p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right())) {
+                if (rightClause) {
                     out.add(CoordinationFeature.RIGHT_CLAUSE.key(0, 0, pairClass), 1);
                 }
                 if (p.leftClass() == HeadClass.VERB && subordinate(w, t, p.left())) {
-                    out.add(CoordinationFeature.LEFT_SUBORDINATE.key(p.rightClass() == HeadClass.VERB && ownSubject(t, c, p.right()) ? 1 : 0, 0, pairClass), 1);
+                    out.add(CoordinationFeature.LEFT_SUBORDINATE.key(rightClause ? 1 : 0, 0, pairClass), 1);
                 }
                 int before = p.leftBegin() - 1;
                 out.add(CoordinationFeature.LEFT_CONTEXT.key(before >= 0 ? tagIds[before] : 0, 0, pairClass), 1);
@@ -210,7 +211,7 @@ public final class CoordinationFeatureExtractor {
                         rightPredicate(w, kinds, c, p.right()), pairClass), 1);
                 if (p.leftClass() == HeadClass.NOUN) {
                     out.add(CoordinationFeature.LEFT_PHRASE.key(prepositionBefore(w, kinds, p.left()),
-                            (ofAfter(w, p.left()) ? 2 : 0) + (opensWithDeterminer(t, p) ? 1 : 0), pairClass), 1);
+                            (ofAfter(w, p.left()) ? 2 : 0) + (rightDeterminer ? 1 : 0), pairClass), 1);
                 }
                 if (p.rightClass() == HeadClass.NOUN) {
                     int k = p.right() + 1;
@@ -301,7 +302,7 @@ public final class CoordinationFeatureExtractor {
     static int leftPredicate(String[] w, byte[] kinds, int k) {
         byte kind = kinds[k];
         if (ConjunctCandidateProposer.isVerb(kind) || kind == ConjunctCandidateProposer.MODAL) return isCopula(w, kinds, k) ? 3 : 1;
-        if (!(isNominal(kind) || kind == ConjunctCandidateProposer.ADJECTIVE)) return 0;
+        if (!(ConjunctCandidateProposer.isNounish(kind) || kind == ConjunctCandidateProposer.ADJECTIVE)) return 0;
         int j = ConjunctCandidateProposer.groupBegin(kinds, k) - 1;
         while (j >= 0 && kinds[j] == ConjunctCandidateProposer.ADVERB) j--;
         return j >= 0 && ConjunctCandidateProposer.isVerb(kinds[j]) && ConjunctCandidateProposer.isOneOf(w[j], ConjunctCandidateProposer.FORMS_OF_BE) ? 2 : 0;
@@ -327,7 +328,7 @@ public final class CoordinationFeatureExtractor {
         while (p < kinds.length && kinds[p] == ConjunctCandidateProposer.ADVERB) p++;
         if (p >= kinds.length) return false;
         byte next = kinds[p];
-        return next == ConjunctCandidateProposer.ADJECTIVE || next == ConjunctCandidateProposer.DETERMINER || isNominal(next)
+        return next == ConjunctCandidateProposer.ADJECTIVE || next == ConjunctCandidateProposer.DETERMINER || ConjunctCandidateProposer.isNounish(next)
                 || next == ConjunctCandidateProposer.PREPOSITION;
     }
 
@@ -370,11 +371,6 @@ public final class CoordinationFeatureExtractor {
         int j = (p.leftClass() == HeadClass.NOUN ? ConjunctCandidateProposer.groupBegin(kinds, p.left()) : p.left()) - 1;
         while (j >= 0 && kinds[j] == ConjunctCandidateProposer.ADVERB) j--;
         return j >= 0 && kinds[j] == ConjunctCandidateProposer.COORDINATOR;
-    }
-
-    private static boolean isNominal(byte kind) {
-        return kind == ConjunctCandidateProposer.NOUN || kind == ConjunctCandidateProposer.PROPER || kind == ConjunctCandidateProposer.PRONOUN
-                || kind == ConjunctCandidateProposer.NUMBER;
     }
 
     /** Words that open a subordinate or relative clause (distinct from the proposer's lists, which bound conjuncts). */
