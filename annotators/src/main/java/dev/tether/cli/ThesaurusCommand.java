@@ -38,7 +38,7 @@ import java.util.Set;
 final class ThesaurusCommand implements Command {
     private static final String BUILD = "thesaurus build --raw PATH... --out FILE [--contexts window|grammatical|all] "
             + "[--weighting relative|ppmi|ppmi-smoothed|ttest] [--measure cosine|lin|jaccard] [--min-frequency N] "
-            + "[--max-context-words N] [--neighbours K] [--threads N | --spark MASTER]";
+            + "[--max-context-words N] [--neighbours K] [--lists-only] [--threads N | --spark MASTER]";
     private static final String QUERY = "thesaurus query --thesaurus FILE [--top N] WORD...";
     private static final String EVALUATE = "thesaurus evaluate --thesaurus FILE --pairs CSV [--json]";
 
@@ -89,6 +89,9 @@ final class ThesaurusCommand implements Command {
               --min-frequency N        tokens a word needs to be in the thesaurus; default %d
               --max-context-words N    contexts shared by more words are pruned; default %d
               --neighbours K           neighbours stored per word; default %d
+              --lists-only             keep the neighbour lists and drop the context vectors: a fraction of the
+                                       size, all that attachment needs; 'evaluate' and the coordination features
+                                       need the vectors
               --threads N              tagging and neighbour-search threads; default: all cores
               --spark MASTER           read, tag and count on Spark (local[N], spark://HOST:PORT, yarn); the
                                        thesaurus is the same, byte for byte
@@ -124,7 +127,7 @@ final class ThesaurusCommand implements Command {
 
     private int build(String[] args, PrintStream out) throws UsageException, IOException {
         CommandArguments a = new CommandArguments("thesaurus build", args, 2, Set.of("raw", "out", "contexts", "weighting",
-                "measure", "min-frequency", "max-context-words", "neighbours", "threads", "spark"), Set.of());
+                "measure", "min-frequency", "max-context-words", "neighbours", "threads", "spark"), Set.of("lists-only"));
         noPositional(a, BUILD);
         if (!a.has("raw")) throw new UsageException("--raw is required: give the text files or folders to learn from");
         Path target = Path.of(a.required("out"));
@@ -179,7 +182,8 @@ final class ThesaurusCommand implements Command {
                 }
             }
             long built = System.nanoTime();
-            Thesaurus thesaurus = ThesaurusBuilder.build(counter, settings, threads);
+            Thesaurus full = ThesaurusBuilder.build(counter, settings, threads);
+            Thesaurus thesaurus = a.has("lists-only") ? full.listsOnly(settings.neighbours()) : full;
             double buildSeconds = (System.nanoTime() - built) / 1e9;
             ThesaurusFile.write(thesaurus, target);
             double seconds = (System.nanoTime() - start) / 1e9;
@@ -198,9 +202,10 @@ final class ThesaurusCommand implements Command {
             }
             out.printf("words    %,d nouns, %,d verbs, %,d adjectives with at least %d tokens%n", thesaurus.size(HeadClass.NOUN),
                     thesaurus.size(HeadClass.VERB), thesaurus.size(HeadClass.ADJECTIVE), settings.minFrequency());
-            out.printf("vectors  %,d contexts (%s), %,d weights (%s); neighbours by %s, k=%d (%.1f s)%n", thesaurus.contexts(),
-                    settings.contexts().label(), thesaurus.vectorEntries(), settings.weighting().label(),
-                    settings.measure().label(), settings.neighbours(), buildSeconds);
+            out.printf("vectors  %,d contexts (%s), %,d weights (%s); neighbours by %s, k=%d (%.1f s)%s%n", full.contexts(),
+                    settings.contexts().label(), full.vectorEntries(), settings.weighting().label(),
+                    settings.measure().label(), settings.neighbours(), buildSeconds,
+                    thesaurus.hasVectors() ? "" : "; vectors not kept (--lists-only)");
             out.printf("wrote    %s  (%.1f s in all, peak heap %.0f MB)%n", target, seconds, heap.peakBytes() / 1e6);
             return counted.documents() == 0 ? Tether.INPUT : counted.skippedCount() > 0 ? Tether.SOME_FAILED : Tether.OK;
         }
@@ -240,7 +245,12 @@ final class ThesaurusCommand implements Command {
     private int evaluate(String[] args, PrintStream out) throws UsageException, IOException {
         CommandArguments a = new CommandArguments("thesaurus evaluate", args, 2, Set.of("thesaurus", "pairs"), Set.of("json"));
         noPositional(a, EVALUATE);
-        Thesaurus thesaurus = ThesaurusFile.read(Path.of(a.required("thesaurus")));
+        String file = a.required("thesaurus");
+        Thesaurus thesaurus = ThesaurusFile.read(Path.of(file));
+        if (!thesaurus.hasVectors()) {
+            throw new UsageException(file + " keeps neighbour lists only (built with --lists-only), and judging word pairs "
+                    + "needs the similarity of any two words; give a thesaurus built without --lists-only");
+        }
         Path pairsFile = Path.of(a.required("pairs"));
         SimilarityEvaluation e = new SimilarityEvaluator().evaluate(thesaurus, new WordPairReader().read(pairsFile));
         if (a.has("json")) {

@@ -80,6 +80,7 @@ final class TrainCommand implements Command {
                 + RAW_ROUNDS + "; 0: unambiguous only)\n"
                 + "  --thesaurus FILE      a thesaurus from 'tether thesaurus build', stored in the model: where the\n"
                 + "                        back-off has little evidence, nearest neighbours of verb, noun and object decide\n"
+                + "                        (one built with --lists-only serves attachment only)\n"
                 + "  --save-raw-counts F   also write the merged raw counts to F (atomically)\n"
                 + "  --threads N           threads that count raw text (default 1; the model is the same for any N)\n"
                 + "  --spark MASTER        count the raw text on Apache Spark instead: local[N] (embedded), spark://host:port,\n"
@@ -276,8 +277,11 @@ final class TrainCommand implements Command {
             } catch (IllegalArgumentException e) {
                 throw new IOException(file + ": " + e.getMessage(), e);
             }
-            out.printf("thesaurus: %s, %,d words (%s), stored in the model for similarity smoothing%n", file.getFileName(),
-                    thesaurus.size(), thesaurus.settings().weighting() + "/" + thesaurus.settings().measure());
+            out.printf("thesaurus: %s, %,d words (%s, %s), stored in the model for similarity smoothing%s%n", file.getFileName(),
+                    thesaurus.size(), thesaurus.settings().weighting() + "/" + thesaurus.settings().measure(),
+                    thesaurus.hasVectors() ? "vectors and " + thesaurus.settings().neighbours() + " neighbours per word"
+                            : thesaurus.settings().neighbours() + " neighbours per word, lists only",
+                    thesaurus.hasVectors() ? "" : " (the coordination features, which need the vectors, do without it)");
         }
         if (a.has("no-tagger")) trainer.withTagger(null);
         else if (!treebanks.isEmpty() && trainTagger(a.values("conllu"), trainer, out) && !a.has("no-ranker")) {

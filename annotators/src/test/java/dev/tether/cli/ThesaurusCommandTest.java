@@ -144,4 +144,23 @@ class ThesaurusCommandTest {
         CommandLineRun none = CommandLineRun.of("thesaurus", "build", "--raw", emptyFolder.toString(), "--out", dir.resolve("none.thesaurus").toString());
         assertEquals(Tether.INPUT, none.exitCode(), none.toString());
     }
+
+    @Test
+    void listsOnlyKeepsTheSameNeighboursInASmallerFileThatEvaluateRefuses() throws Exception {
+        Path lists = dir.resolve("lists.thesaurus");
+        CommandLineRun r = CommandLineRun.of("thesaurus", "build", "--raw", logs.resolve("log-1.txt").toString(), "--out",
+                lists.toString(), "--min-frequency", "3", "--neighbours", "5", "--threads", "1", "--lists-only");
+        assertEquals(Tether.OK, r.exitCode(), r.toString());
+        assertTrue(r.out().contains("vectors not kept (--lists-only)"), r.out());
+        assertTrue(Files.size(lists) < Files.size(thesaurus), Files.size(lists) + " against " + Files.size(thesaurus));
+        CommandLineRun full = CommandLineRun.of("thesaurus", "query", "--thesaurus", thesaurus.toString(), "gasket", "replaced");
+        CommandLineRun fromLists = CommandLineRun.of("thesaurus", "query", "--thesaurus", lists.toString(), "gasket", "replaced");
+        assertEquals(Tether.OK, fromLists.exitCode(), fromLists.toString());
+        assertEquals(full.out(), fromLists.out());
+        Path pairs = dir.resolve("pairs-for-lists.csv");
+        Files.writeString(pairs, "gasket,valve,3.9\nengineer,deckhand,3.5\n");
+        CommandLineRun e = CommandLineRun.of("thesaurus", "evaluate", "--thesaurus", lists.toString(), "--pairs", pairs.toString());
+        assertEquals(Tether.USAGE, e.exitCode(), e.toString());
+        assertTrue(e.err().contains(lists + " keeps neighbour lists only"), e.err());
+    }
 }

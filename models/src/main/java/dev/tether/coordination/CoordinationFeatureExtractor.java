@@ -15,8 +15,9 @@ import java.util.Set;
  * Turns a {@link CoordinationQuery} into the ranker's features (templates in {@link CoordinationFeature}): for the
  * choice of conjunct heads, one sparse vector per candidate pair; for the scope of a modifier, two candidates, "not
  * shared" (no features: the reference) and "shared". Counts come from {@code statistics} (at training, the counts of
- * the other folds); the thesaurus is optional: without one the similarity and composition families give nothing.
- * Immutable and thread-safe (each thread keeps the codes of the last sentence it was asked about).
+ * the other folds); the thesaurus is optional: without one the similarity and composition families give nothing,
+ * and a thesaurus of neighbour lists only ({@link Thesaurus#hasVectors}) counts as none: the similarity of any two
+ * conjunct heads needs the vectors. Immutable and thread-safe (each thread keeps the codes of the last sentence it was asked about).
  */
 public final class CoordinationFeatureExtractor {
     private static final double CLIP = 8;
@@ -30,7 +31,7 @@ public final class CoordinationFeatureExtractor {
     public CoordinationFeatureExtractor(CoordinationStatistics statistics, Thesaurus thesaurus, WordNormalizer normalizer,
                                         Set<CoordinationFeatureFamily> families) {
         this.statistics = statistics;
-        this.thesaurus = thesaurus;
+        this.thesaurus = withVectors(thesaurus);
         this.normalizer = normalizer;
         this.keys = new CoordinationWords(normalizer);
         for (CoordinationFeatureFamily f : families) on[f.ordinal()] = true;
@@ -43,6 +44,11 @@ public final class CoordinationFeatureExtractor {
     }
 
     public boolean hasThesaurus() { return thesaurus != null; }
+
+    /** {@code t} when it keeps its vectors, else null: the coordination features read similarities of any pair. */
+    static Thesaurus withVectors(Thesaurus t) {
+        return t != null && t.hasVectors() ? t : null;
+    }
 
     private boolean on(CoordinationFeatureFamily f) { return on[f.ordinal()]; }
 

@@ -20,7 +20,8 @@ import java.util.Set;
  * ({@link dev.tether.ranking}): one over the candidate pairs of conjunct heads, one over "shared" against "not
  * shared" for each modifier around the chosen pair. Features come from {@link CoordinationFeatureExtractor} over the
  * model's coordination counts and, when one is given, a thesaurus ({@link #withThesaurus}; without one the
- * similarity features are absent, and a ranker trained without one never weighs them). Immutable and thread-safe
+ * similarity features are absent, and a ranker trained without one never weighs them; a thesaurus of neighbour lists
+ * only counts as none). Immutable and thread-safe
  * (two reusable feature buffers per thread: pair features, which {@link #choose} keeps until it has weighed the best
  * reading against the runner-up for the evidence, and scope features).
  */
@@ -57,7 +58,7 @@ public final class CoordinationRanker {
         this.scopeWeights = scopeWeights;
         this.families = EnumSet.copyOf(families);
         this.counts = counts;
-        this.thesaurus = thesaurus;
+        this.thesaurus = CoordinationFeatureExtractor.withVectors(thesaurus);
         this.extractor = new CoordinationFeatureExtractor(counts, thesaurus, new WordNormalizer(), families);
     }
 

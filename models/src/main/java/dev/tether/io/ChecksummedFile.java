@@ -38,8 +38,8 @@ public final class ChecksummedFile {
         }
     }
 
-    /** Where the verified payload lies in the file's bytes, and the file's digest. */
-    public record Payload(int offset, int length, byte[] digest) {
+    /** Where the verified payload lies in the file's bytes, the file's digest, and its format version. */
+    public record Payload(int offset, int length, byte[] digest, int version) {
     }
 
     private ChecksummedFile() {
@@ -70,6 +70,12 @@ public final class ChecksummedFile {
      */
     public static <E extends IOException> Payload open(byte[] bytes, Kind kind, int version, String name,
                                                        Function<String, E> error) throws E {
+        return open(bytes, kind, version, version, name, error);
+    }
+
+    /** As {@link #open(byte[], Kind, int, String, Function)}, for a reader of every format version from {@code oldest} to {@code newest}. */
+    public static <E extends IOException> Payload open(byte[] bytes, Kind kind, int oldest, int newest, String name,
+                                                       Function<String, E> error) throws E {
         byte[] magic = kind.magicBytes();
         int header = magic.length + 4 + 8;
         if (bytes.length < magic.length || !Arrays.equals(Arrays.copyOf(bytes, magic.length), magic)) {
@@ -82,9 +88,9 @@ public final class ChecksummedFile {
         ByteBuffer head = ByteBuffer.wrap(bytes, magic.length, 12);
         int found = head.getInt();
         long payloadLength = head.getLong();
-        if (found != version) {
+        if (found < oldest || found > newest) {
             throw error.apply(name + " has " + kind.noun() + " format version " + found + "; this build of Tether reads version "
-                    + version + ". " + kind.versionAdvice());
+                    + (oldest == newest ? String.valueOf(newest) : oldest + " to " + newest) + ". " + kind.versionAdvice());
         }
         if (payloadLength < 0 || header + payloadLength + DIGEST_BYTES != bytes.length) {
             throw error.apply(name + " is truncated or has trailing bytes (expected "
@@ -97,6 +103,6 @@ public final class ChecksummedFile {
         if (!Arrays.equals(actual, Arrays.copyOfRange(bytes, bodyLength, bytes.length))) {
             throw error.apply(name + " is damaged: its checksum does not match its content; " + kind.again());
         }
-        return new Payload(header, (int) payloadLength, actual);
+        return new Payload(header, (int) payloadLength, actual, found);
     }
 }

@@ -5,7 +5,10 @@ import gnu.trove.map.hash.TObjectIntHashMap;
 
 /**
  * A distributional thesaurus: for every noun, verb and adjective above a frequency floor, its weighted context
- * vector and its k nearest neighbours among words of the same class.
+ * vector and its k nearest neighbours among words of the same class. A thesaurus may keep its neighbour lists only
+ * ({@link #listsOnly}): a fraction of the size, enough for the attachment ranker's similar-words features and the
+ * similarity-smoothed back-off, which read neighbours and their scores; {@link #similarity} of any pair then needs the
+ * full thesaurus ({@link #hasVectors}).
  *
  * <p><b>Keys.</b> A word is looked up by its class and its normalized key, exactly as the model's count tables key
  * heads: nouns by {@link dev.tether.vocabulary.WordNormalizer#noun}, verbs by
@@ -26,6 +29,7 @@ public final class Thesaurus {
     private final String[] keys;
     private final HeadClass[] classes;
     private final TObjectIntHashMap<String>[] ids;
+    /** Null when the thesaurus keeps its neighbour lists only. */
     private final ContextVectors vectors;
     private final int[] neighbourStart;
     private final int[] neighbourIds;
@@ -73,7 +77,37 @@ public final class Thesaurus {
     public double similarity(int a, int b) {
         checkId(a);
         checkId(b);
+        if (vectors == null) {
+            throw new IllegalStateException("this thesaurus keeps its neighbour lists only, so the similarity of any two words "
+                    + "cannot be computed; use a thesaurus built without --lists-only ('tether thesaurus build')");
+        }
         return vectors.similarity(settings.measure(), a, b);
+    }
+
+    /** Whether the thesaurus keeps its words' context vectors (and so gives {@link #similarity} of any pair). */
+    public boolean hasVectors() {
+        return vectors != null;
+    }
+
+    /**
+     * This thesaurus without its context vectors and with at most {@code k} neighbours per word (the nearest; the
+     * same words, ids and scores). The neighbour lists of the result are a prefix of this one's, so any reader that
+     * consults at most {@code k} neighbours sees exactly what it sees here.
+     */
+    public Thesaurus listsOnly(int k) {
+        if (k < 1) throw new IllegalArgumentException("a thesaurus keeps at least 1 neighbour per word, was " + k);
+        int kept = Math.min(k, settings.neighbours());
+        int[] start = new int[keys.length + 1];
+        for (int w = 0; w < keys.length; w++) start[w + 1] = start[w] + Math.min(kept, neighbourCount(w));
+        int[] ids = new int[start[keys.length]];
+        float[] scores = new float[ids.length];
+        for (int w = 0; w < keys.length; w++) {
+            int n = start[w + 1] - start[w];
+            System.arraycopy(neighbourIds, neighbourStart[w], ids, start[w], n);
+            System.arraycopy(neighbourScores, neighbourStart[w], scores, start[w], n);
+        }
+        return new Thesaurus(normalizerVersion, settings.withNeighbours(kept), sentences, tokens, keys, classes, null,
+                start, ids, scores);
     }
 
     /** Number of words. */
@@ -101,12 +135,14 @@ public final class Thesaurus {
     /** Sentences and tokens of the text the thesaurus was built from. */
     public long sentences() { return sentences; }
     public long tokens() { return tokens; }
-    /** Number of distinct contexts kept in the vectors. */
-    public int contexts() { return vectors.contexts(); }
-    /** Number of non-zero word–context weights. */
-    public long vectorEntries() { return vectors.entries(); }
+    /** Number of distinct contexts kept in the vectors (0 for a thesaurus of neighbour lists only). */
+    public int contexts() { return vectors == null ? 0 : vectors.contexts(); }
+    /** Number of non-zero word–context weights (0 for a thesaurus of neighbour lists only). */
+    public long vectorEntries() { return vectors == null ? 0 : vectors.entries(); }
     /** Approximate heap bytes of vectors and neighbour lists. */
-    public long approximateBytes() { return vectors.approximateBytes() + 8L * neighbourIds.length + 4L * neighbourStart.length; }
+    public long approximateBytes() {
+        return (vectors == null ? 0 : vectors.approximateBytes()) + 8L * neighbourIds.length + 4L * neighbourStart.length;
+    }
 
     /** Number of stored neighbours of word {@code id}; with {@link #neighbourId} and {@link #neighbourScore}, no allocation. */
     public int neighbourCount(int id) {
@@ -131,6 +167,7 @@ public final class Thesaurus {
 
     int neighbourIdAt(int slot) { return neighbourIds[slot]; }
     float neighbourScoreAt(int slot) { return neighbourScores[slot]; }
+    /** Null for a thesaurus of neighbour lists only. */
     ContextVectors vectors() { return vectors; }
 
     private void checkId(int id) {

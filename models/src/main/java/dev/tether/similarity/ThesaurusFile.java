@@ -26,16 +26,19 @@ import java.util.zip.InflaterInputStream;
  *   "TETHER-THESAURUS\n"      17 bytes, identifies the file
  *   format version            int
  *   payload length            long, bytes of the compressed payload
- *   payload                   deflate-compressed: normalizer version, settings, corpus size, words (class, key),
- *                             context vectors (context ids as gaps, weights), neighbour lists (ids, scores)
+ *   payload                   deflate-compressed: normalizer version, settings, corpus size, whether the vectors
+ *                             are kept (since version 2), words (class, key), context vectors if kept (context ids
+ *                             as gaps, weights), neighbour lists (ids, scores)
  *   SHA-256                   32 bytes over everything before it
  * </pre>
  * Writing is atomic (temporary file, then rename); the same thesaurus always gives the same bytes. Reading checks
  * the header, the version, the checksum, the normalization the words were keyed with, and the consistency of every
- * list, and fails with a message that names the file.
+ * list, and fails with a message that names the file. Version 1 (always with vectors) is still read.
  */
 public final class ThesaurusFile {
-    public static final int FORMAT_VERSION = 1;
+    public static final int FORMAT_VERSION = 2;
+    /** The oldest version this build reads: version 1 files always kept their vectors. */
+    public static final int OLDEST_READABLE = 1;
     private static final ChecksummedFile.Kind KIND = new ChecksummedFile.Kind("TETHER-THESAURUS\n", "thesaurus",
             "a file written by 'tether thesaurus build'", "copy or build it again",
             "Build the thesaurus again with this version ('tether thesaurus build').");
@@ -84,6 +87,7 @@ public final class ThesaurusFile {
             out.writeInt(s.neighbours());
             out.writeLong(t.sentences());
             out.writeLong(t.tokens());
+            out.writeBoolean(t.hasVectors());
             int words = t.size();
             out.writeInt(words);
             for (int w = 0; w < words; w++) {
@@ -91,15 +95,17 @@ public final class ThesaurusFile {
                 out.writeUTF(t.key(w));
             }
             ContextVectors v = t.vectors();
-            out.writeInt(v.contexts());
-            for (int w = 0; w < words; w++) {
-                out.writeInt(v.end(w) - v.start(w));
-                int previous = -1;
-                for (int i = v.start(w); i < v.end(w); i++) {
-                    out.writeInt(v.context(i) - previous);
-                    previous = v.context(i);
+            if (v != null) {
+                out.writeInt(v.contexts());
+                for (int w = 0; w < words; w++) {
+                    out.writeInt(v.end(w) - v.start(w));
+                    int previous = -1;
+                    for (int i = v.start(w); i < v.end(w); i++) {
+                        out.writeInt(v.context(i) - previous);
+                        previous = v.context(i);
+                    }
+                    for (int i = v.start(w); i < v.end(w); i++) out.writeFloat(v.weight(i));
                 }
-                for (int i = v.start(w); i < v.end(w); i++) out.writeFloat(v.weight(i));
             }
             for (int w = 0; w < words; w++) {
                 int n = t.neighbourCount(w);
@@ -114,7 +120,8 @@ public final class ThesaurusFile {
     }
 
     static Thesaurus decode(byte[] bytes, String name) throws ThesaurusFormatException {
-        ChecksummedFile.Payload framed = ChecksummedFile.open(bytes, KIND, FORMAT_VERSION, name, ThesaurusFormatException::new);
+        ChecksummedFile.Payload framed = ChecksummedFile.open(bytes, KIND, OLDEST_READABLE, FORMAT_VERSION, name,
+                ThesaurusFormatException::new);
         Inflater inflater = new Inflater();
         try (DataInputStream in = new DataInputStream(new InflaterInputStream(
                 new ByteArrayInputStream(bytes, framed.offset(), framed.length()), inflater, 1 << 16))) {
@@ -127,6 +134,7 @@ public final class ThesaurusFile {
                     SimilarityMeasure.of(in.readUTF()), in.readInt(), in.readInt(), in.readInt());
             long sentences = in.readLong();
             long tokens = in.readLong();
+            boolean hasVectors = framed.version() < 2 || in.readBoolean();
             int words = count(in.readInt(), "word count");
             String[] keys = new String[words];
             HeadClass[] classes = new HeadClass[words];
@@ -140,34 +148,7 @@ public final class ThesaurusFile {
                     throw new IOException("words out of order at " + w);
                 }
             }
-            int contexts = count(in.readInt(), "context count");
-            int[] start = new int[words + 1];
-            int[] context = new int[16];
-            float[] weight = new float[16];
-            for (int w = 0; w < words; w++) {
-                int n = count(in.readInt(), "vector length");
-                int at = start[w];
-                if (at + n > context.length) {
-                    int size = Math.max(at + n, context.length * 2);
-                    context = Arrays.copyOf(context, size);
-                    weight = Arrays.copyOf(weight, size);
-                }
-                int previous = -1;
-                for (int i = 0; i < n; i++) {
-                    int gap = in.readInt();
-                    if (gap <= 0 || (long) previous + gap >= contexts) throw new IOException("context ids out of order in word " + w);
-                    previous += gap;
-                    context[at + i] = previous;
-                }
-                for (int i = 0; i < n; i++) {
-                    float x = in.readFloat();
-                    if (!(x > 0) || !Float.isFinite(x)) throw new IOException("weight " + x + " in word " + w);
-                    weight[at + i] = x;
-                }
-                start[w + 1] = at + n;
-            }
-            ContextVectors vectors = new ContextVectors(start, Arrays.copyOf(context, start[words]),
-                    Arrays.copyOf(weight, start[words]), contexts);
+            ContextVectors vectors = hasVectors ? readVectors(in, words) : null;
             int[] nStart = new int[words + 1];
             int[] ids = new int[16];
             float[] scores = new float[16];
@@ -204,6 +185,36 @@ public final class ThesaurusFile {
         } finally {
             inflater.end();
         }
+    }
+
+    private static ContextVectors readVectors(DataInputStream in, int words) throws IOException {
+        int contexts = count(in.readInt(), "context count");
+        int[] start = new int[words + 1];
+        int[] context = new int[16];
+        float[] weight = new float[16];
+        for (int w = 0; w < words; w++) {
+            int n = count(in.readInt(), "vector length");
+            int at = start[w];
+            if (at + n > context.length) {
+                int size = Math.max(at + n, context.length * 2);
+                context = Arrays.copyOf(context, size);
+                weight = Arrays.copyOf(weight, size);
+            }
+            int previous = -1;
+            for (int i = 0; i < n; i++) {
+                int gap = in.readInt();
+                if (gap <= 0 || (long) previous + gap >= contexts) throw new IOException("context ids out of order in word " + w);
+                previous += gap;
+                context[at + i] = previous;
+            }
+            for (int i = 0; i < n; i++) {
+                float x = in.readFloat();
+                if (!(x > 0) || !Float.isFinite(x)) throw new IOException("weight " + x + " in word " + w);
+                weight[at + i] = x;
+            }
+            start[w + 1] = at + n;
+        }
+        return new ContextVectors(start, Arrays.copyOf(context, start[words]), Arrays.copyOf(weight, start[words]), contexts);
     }
 
     private static int count(int n, String what) throws IOException {

@@ -7,7 +7,7 @@ import java.util.Random;
  * fixed seed: parts are replaced, inspected and cleaned on engines and pumps, crew members do the work. Parts and
  * crew occur in different slots, so a thesaurus should find parts like parts and crew like crew.
  */
-final class FerryLogCorpus {
+public final class FerryLogCorpus {
     static final String[] CREW = {"engineer", "deckhand", "mechanic", "mate", "skipper"};
     static final String[] PARTS = {"gasket", "valve", "seal", "filter", "impeller", "hose", "belt"};
     static final String[] MACHINES = {"pump", "engine", "winch", "compressor", "generator"};
@@ -18,7 +18,7 @@ final class FerryLogCorpus {
     }
 
     /** Feeds {@code sentences} sentences to {@code counter}. */
-    static ContextCounter count(int sentences, long seed) {
+    public static ContextCounter count(int sentences, long seed) {
         ContextCounter counter = new ContextCounter();
         Random r = new Random(seed);
         for (int i = 0; i < sentences; i++) {

@@ -4,14 +4,22 @@ import dev.tether.candidates.HeadClass;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import dev.tether.io.ChecksummedFile;
+
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.DataInputStream;
 import java.io.IOException;
 import java.nio.ByteBuffer;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.stream.Stream;
+import java.util.zip.DeflaterOutputStream;
+import java.util.zip.InflaterInputStream;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -93,8 +101,77 @@ class ThesaurusFileTest {
         Files.write(file, bytes);
         ThesaurusFormatException e = assertThrows(ThesaurusFormatException.class, () -> ThesaurusFile.read(file));
         assertEquals(file + " has thesaurus format version " + (ThesaurusFile.FORMAT_VERSION + 1) + "; this build of Tether "
-                + "reads version " + ThesaurusFile.FORMAT_VERSION + ". Build the thesaurus again with this version "
-                + "('tether thesaurus build').", e.getMessage());
+                + "reads version " + ThesaurusFile.OLDEST_READABLE + " to " + ThesaurusFile.FORMAT_VERSION
+                + ". Build the thesaurus again with this version ('tether thesaurus build').", e.getMessage());
+    }
+
+    @Test
+    void neighbourListsOnlyKeepTheNearestNeighboursAndDropTheVectors() throws IOException {
+        Thesaurus t = small();
+        Thesaurus lists = t.listsOnly(3);
+        assertTrue(t.hasVectors());
+        assertFalse(lists.hasVectors());
+        assertEquals(3, lists.settings().neighbours());
+        assertEquals(0, lists.contexts());
+        assertEquals(t.size(), lists.size());
+        int longer = 0;
+        for (int a = 0; a < t.size(); a++) {
+            assertEquals(t.key(a), lists.key(a));
+            assertEquals(Math.min(3, t.neighbourCount(a)), lists.neighbourCount(a));
+            if (t.neighbourCount(a) > 3) longer++;
+            for (int i = 0; i < lists.neighbourCount(a); i++) {
+                assertEquals(t.neighbourId(a, i), lists.neighbourId(a, i));
+                assertEquals(t.neighbourScore(a, i), lists.neighbourScore(a, i));
+            }
+        }
+        assertTrue(longer > 0, "the ferry-log thesaurus has words with more than 3 neighbours, so the lists were cut");
+        IllegalStateException e = assertThrows(IllegalStateException.class, () -> lists.similarity(0, 1));
+        assertTrue(e.getMessage().contains("neighbour lists only"), e.getMessage());
+
+        Path file = dir.resolve("lists.thesaurus");
+        ThesaurusFile.write(lists, file);
+        Thesaurus back = ThesaurusFile.read(file);
+        assertFalse(back.hasVectors());
+        assertArrayEquals(Files.readAllBytes(file), ThesaurusFile.encode(back));
+        assertTrue(Files.size(file) < ThesaurusFile.encode(t).length / 2,
+                Files.size(file) + " bytes of lists against " + ThesaurusFile.encode(t).length + " in all");
+    }
+
+    /** A file of format version 1 (vectors always kept, no flag for them) is still read, vectors and all. */
+    @Test
+    void aVersionOneFileIsStillRead() throws IOException {
+        Thesaurus t = small();
+        Path file = dir.resolve("version1.thesaurus");
+        Files.write(file, asVersionOne(ThesaurusFile.encode(t)));
+        Thesaurus back = ThesaurusFile.read(file);
+        assertTrue(back.hasVectors());
+        assertEquals(t.size(), back.size());
+        for (int a = 0; a < t.size(); a++) {
+            assertEquals(t.neighbourCount(a), back.neighbourCount(a));
+            for (int b = 0; b < t.size(); b++) assertEquals(t.similarity(a, b), back.similarity(a, b));
+        }
+        assertArrayEquals(ThesaurusFile.encode(t), ThesaurusFile.encode(back), "written again, it is a version-2 file");
+    }
+
+    /** The bytes of a version-2 file with vectors rewritten as version 1 wrote them: the same payload without the flag. */
+    private static byte[] asVersionOne(byte[] file) throws IOException {
+        int header = "TETHER-THESAURUS\n".length() + 4 + 8;
+        ByteBuffer frame = ByteBuffer.wrap(file);
+        int length = (int) frame.getLong("TETHER-THESAURUS\n".length() + 4);
+        byte[] payload = new InflaterInputStream(new ByteArrayInputStream(file, header, length)).readAllBytes();
+        DataInputStream in = new DataInputStream(new ByteArrayInputStream(payload));
+        for (int i = 0; i < 4; i++) in.readUTF();
+        for (int i = 0; i < 3; i++) in.readInt();
+        in.readLong();
+        in.readLong();
+        int flagAt = payload.length - in.available();
+        assertEquals(1, payload[flagAt], "the flag that the vectors are kept");
+        ByteArrayOutputStream older = new ByteArrayOutputStream();
+        try (DeflaterOutputStream out = new DeflaterOutputStream(older)) {
+            out.write(payload, 0, flagAt);
+            out.write(payload, flagAt + 1, payload.length - flagAt - 1);
+        }
+        return ChecksummedFile.frame(new ChecksummedFile.Kind("TETHER-THESAURUS\n", "thesaurus", "", "", ""), 1, older);
     }
 
     @Test
