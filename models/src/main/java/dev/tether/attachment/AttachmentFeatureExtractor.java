@@ -53,6 +53,8 @@ public final class AttachmentFeatureExtractor {
     /** For each thesaurus id, the word's id in {@code statistics} (0 when the statistics never saw it). */
     private final int[] statisticsIds;
     private final SimilarityBackedOffScorer similarQuadruples;
+    /** The two-word pools summed once, and which neighbours the three-word pools need to look up. */
+    private final SimilarWordPools pools;
 
     public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
                                       WordNormalizer normalizer, Set<AttachmentFeatureFamily> families) {
@@ -77,11 +79,18 @@ public final class AttachmentFeatureExtractor {
             for (int t = 0; t < statisticsIds.length; t++) statisticsIds[t] = Math.max(0, statistics.words().id(thesaurus.key(t)));
             this.similarQuadruples = new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer, NEIGHBOURS,
                     SimilarityBackedOffScorer.MIN_TRIPLE_TRIALS, SimilarityBackedOffScorer.POWER, SimilarityBackedOffScorer.PAIR_BLEND);
+            this.pools = new SimilarWordPools(statistics, thesaurus, statisticsIds, NEIGHBOURS);
         } else {
             this.thesaurus = null;
             this.statisticsIds = null;
             this.similarQuadruples = null;
+            this.pools = null;
         }
+    }
+
+    /** The pools summed at load, null without a thesaurus (for tests). */
+    SimilarWordPools pools() {
+        return pools;
     }
 
     /** The thesaurus the similar-words features read, if they are on. */
@@ -104,7 +113,9 @@ public final class AttachmentFeatureExtractor {
         // table is probed once per candidate.
         double[][] factors = new double[q.size()][3];
         long[][] entries = new long[q.size()][HeadChoiceScorer.STRUCTURE_ENTRY + 1];
-        HeadChoice base = countScorer.choose(q, factors, entries);
+        String[] headKeys = new String[q.size()];
+        int[] headIds = new int[q.size()];
+        HeadChoice base = countScorer.choose(q, factors, entries, headKeys, headIds);
         out.reset();
         int n = q.size();
         String prepositionKey = normalizer.preposition(q.preposition());
@@ -128,15 +139,17 @@ public final class AttachmentFeatureExtractor {
             int n1 = quadruples.words().id(nounKey);
             int p = quadruples.prepositions().id(prepositionKey);
             int n2 = quadruples.words().id(objectKey);
+            QuadrupleDecision plain = null;
             if (on(AttachmentFeatureFamily.BACKED_OFF) || on(AttachmentFeatureFamily.ASSOCIATION)) {
                 QuadrupleDecision d = backedOff.decide(v, n1, p, n2);
+                plain = d;
                 quadrupleNoun = d.nounProbability();
                 quadrupleBasis = d.basis().ordinal();
                 double s = association.decide(v, n1, p, n2).score();
                 la = Math.max(-CLIP, Math.min(CLIP, s));
             }
             if (thesaurus != null) {
-                QuadrupleDecision d = similarQuadruples.decide(v, n1, p, n2, verbKey, nounKey, objectKey);
+                QuadrupleDecision d = similarQuadruples.decide(v, n1, p, n2, verbKey, nounKey, objectKey, plain);
                 if (d.basis() == DecisionBasis.SIMILAR_QUADRUPLES || d.basis() == DecisionBasis.SIMILAR_TRIPLES) {
                     similarNoun = d.nounProbability();
                     similarBasis = d.basis().ordinal();
@@ -159,7 +172,8 @@ public final class AttachmentFeatureExtractor {
             HeadClass hc = q.headClass(i);
             int c = hc.ordinal();
             int rank = seenOfClass[c]++;
-            String headKey = HeadChoiceScorer.headKey(normalizer, q.head(i), hc);
+            // Filled by the count score when the preposition is known to the counts; else worked out here.
+            String headKey = headKeys[i] != null ? headKeys[i] : HeadChoiceScorer.headKey(normalizer, q.head(i), hc);
             if (on(AttachmentFeatureFamily.COUNT_SCORE)) {
                 out.add(AttachmentFeature.COUNT_SCORE_LOG.key(0, 0, c), Math.max(-20, Math.log(base.probability(i))));
                 for (int k = 0; k < 3; k++) {
@@ -204,9 +218,11 @@ public final class AttachmentFeatureExtractor {
             }
             if (thesaurus != null && sp > 0) {
                 int headEntry = thesaurus.id(hc, headKey);
-                int sh = Math.max(0, statistics.words().id(headKey));
+                int sh = headKeys[i] != null ? headIds[i] : Math.max(0, statistics.words().id(headKey));
+                int headPool = headEntry == Thesaurus.UNKNOWN ? -1 : pools.head(headEntry, sp, c);
+                int objectPool = objectEntry == Thesaurus.UNKNOWN ? -1 : pools.object(objectEntry, sp, c);
                 for (int slot = AttachmentFeature.SIMILAR_HEAD; slot <= AttachmentFeature.SIMILAR_CLASS_OBJECT; slot++) {
-                    if (!pool(slot, sp, c, sh, headEntry, so, objectEntry, pool, null)) continue;
+                    if (!pooled(slot, sp, c, sh, headEntry, headPool, so, objectEntry, objectPool, pool)) continue;
                     int seen = seenBucket(entries[i][exactPart(slot).ordinal()]);
                     out.add(AttachmentFeature.SIMILAR_LOG_ODDS.key(slot, seen, c), Math.log((pool[0] + 0.5) / (pool[1] - pool[0] + 0.5)));
                     out.add(AttachmentFeature.SIMILAR_TRIALS.key(slot, seen, c), Math.log1p(pool[1]));
@@ -278,12 +294,60 @@ public final class AttachmentFeatureExtractor {
     }
 
     /**
+     * What {@link #pool} gives, the same doubles, from the pools summed at load ({@link SimilarWordPools}): the
+     * two-word slots are one lookup, and the three-word slots look up only the neighbours that have two-word cases.
+     * {@code headPool} and {@code objectPool} are the pools of the candidate and of the object for this preposition
+     * and class (-1: none).
+     */
+    boolean pooled(int slot, int sp, int c, int sh, int headEntry, int headPool, int so, int objectEntry, int objectPool,
+                   double[] out) {
+        out[0] = 0;
+        out[1] = 0;
+        switch (slot) {
+            case AttachmentFeature.SIMILAR_HEAD:
+                if (headPool < 0) return false;
+                out[0] = pools.headHits(headPool);
+                out[1] = pools.headTrials(headPool);
+                return out[1] > 0;
+            case AttachmentFeature.SIMILAR_CLASS_OBJECT:
+                if (objectPool < 0) return false;
+                out[0] = pools.objectHits(objectPool);
+                out[1] = pools.objectTrials(objectPool);
+                return out[1] > 0;
+            case AttachmentFeature.SIMILAR_HEAD_WITH_OBJECT:
+                if (headEntry == Thesaurus.UNKNOWN || so == 0) return false;
+                return poolTriples(headEntry, pools.mask(true, headPool), statistics.lexical(sp, Part.HEAD_OBJECT), c, sh, so, true, out);
+            default:
+                if (objectEntry == Thesaurus.UNKNOWN || sh == 0) return false;
+                return poolTriples(objectEntry, pools.mask(false, objectPool), statistics.lexical(sp, Part.HEAD_OBJECT), c, sh, so, false, out);
+        }
+    }
+
+    /** The three-word pool over the neighbours of {@code entry} in {@code mask}, in neighbour order (as {@link #pool}). */
+    private boolean poolTriples(int entry, long mask, TupleCounts table, int c, int sh, int so, boolean byHead, double[] out) {
+        int k = Math.min(NEIGHBOURS, thesaurus.neighbourCount(entry));
+        for (long m = mask; m != 0; m &= m - 1) {
+            int j = Long.numberOfTrailingZeros(m);
+            if (j >= k) break;
+            double s = thesaurus.neighbourScore(entry, j);
+            if (!(s > 0)) continue;
+            int w = statisticsIds[thesaurus.neighbourId(entry, j)];
+            if (w == 0) continue;
+            long e = table.find(byHead ? TupleKey.of(w, c + 1, so) : TupleKey.of(sh, c + 1, w));
+            if (e == TupleCounts.ABSENT) continue;
+            out[0] += s * TupleCounts.hitsIn(e);
+            out[1] += s * TupleCounts.trialsIn(e);
+        }
+        return out[1] > 0;
+    }
+
+    /**
      * Pools into {@code out} (hits, cases) the counts of one similar-words slot over the neighbours of the candidate
      * ({@code headEntry}) or of the object ({@code objectEntry}), each case weighted by similarity; returns whether
      * any neighbour had cases. {@code contributions}, when given, receives "neighbour (weighted cases)" per neighbour
      * that had some, for the evidence.
      */
-    private boolean pool(int slot, int sp, int c, int sh, int headEntry, int so, int objectEntry, double[] out,
+    boolean pool(int slot, int sp, int c, int sh, int headEntry, int so, int objectEntry, double[] out,
                          List<double[]> contributions) {
         out[0] = 0;
         out[1] = 0;

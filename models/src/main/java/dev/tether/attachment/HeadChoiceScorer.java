@@ -68,7 +68,7 @@ public final class HeadChoiceScorer {
     }
 
     public HeadChoice choose(AttachmentQuery q) {
-        return choose(q, null, null);
+        return choose(q, null, null, null, null);
     }
 
     /** Index of the structural entry in a row of {@link #choose(AttachmentQuery, double[][], long[][])}'s entries. */
@@ -78,9 +78,11 @@ public final class HeadChoiceScorer {
      * As {@link #choose(AttachmentQuery)}; when {@code factors} is given (one row of three per candidate), it receives
      * each candidate's structural rate S, class factor (Pc/Rc) and word factor (Pw/Pc), and when {@code entries} is
      * given (one row of {@code STRUCTURE_ENTRY + 1} per candidate), the count entries it read for the candidate: one per
-     * lexical {@link Part} (by ordinal) and the structural one last, {@link TupleCounts#ABSENT} where there was none.
+     * lexical {@link Part} (by ordinal) and the structural one last, {@link TupleCounts#ABSENT} where there was none;
+     * {@code keys} and {@code ids}, when given, receive each candidate's normalized head key and its word id in the
+     * counts (0 when unseen), so that a caller over the same counts need not work them out again.
      */
-    HeadChoice choose(AttachmentQuery q, double[][] factors, long[][] entries) {
+    HeadChoice choose(AttachmentQuery q, double[][] factors, long[][] entries, String[] keys, int[] ids) {
         int n = q.size();
         Vocabulary words = counts.words();
         int p = counts.prepositions().id(normalizer.preposition(q.preposition()));
@@ -116,7 +118,12 @@ public final class HeadChoiceScorer {
                     ev = HeadChoice.Evidence.CLASS;
                 }
                 pw = pc;
-                int h = words.id(headKey(normalizer, q.head(i), hc));
+                String key = headKey(normalizer, q.head(i), hc);
+                int h = words.id(key);
+                if (keys != null) {
+                    keys[i] = key;
+                    ids[i] = Math.max(0, h);
+                }
                 double midHits = 0;
                 double midTrials = 0;
                 if (h > 0) he = counts.lexical(p, Part.HEAD).find(TupleKey.of(h, c + 1));

@@ -24,7 +24,8 @@ import java.util.List;
  * </ol>
  * A word the counts never saw but the thesaurus knows still finds its neighbours, which is where smoothing helps most.
  * {@link #explain} names the neighbours that carried the most weight. Immutable and thread-safe; the neighbour lists
- * are mapped to count ids once, in the constructor.
+ * are mapped to count ids once, in the constructor, with which neighbours the counts saw in each slot with each
+ * preposition ({@link NeighbourMasks}), so that a decision looks up only those.
  */
 public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     /** Neighbours consulted per word (chosen on a held-out fifth of the quadruple training split; see README). */
@@ -48,6 +49,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private final double pairBlend;
     /** For each thesaurus id, the word's id in the counts (0 when the counts never saw it). */
     private final int[] countIds;
+    /** Per slot (verb, first noun, object), which neighbours the counts saw there with each preposition. */
+    private final NeighbourMasks[] seen;
 
     public SimilarityBackedOffScorer(QuadrupleCounts counts, Thesaurus thesaurus, WordNormalizer normalizer) {
         this(counts, thesaurus, normalizer, NEIGHBOURS, MIN_TRIPLE_TRIALS, POWER, PAIR_BLEND);
@@ -72,6 +75,10 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         this.minTripleTrials = minTripleTrials;
         this.countIds = new int[thesaurus.size()];
         for (int t = 0; t < countIds.length; t++) countIds[t] = Math.max(0, counts.words().id(thesaurus.key(t)));
+        this.seen = new NeighbourMasks[] {
+                new NeighbourMasks(counts, 0, HeadClass.VERB, thesaurus, countIds, neighbours),
+                new NeighbourMasks(counts, 1, HeadClass.NOUN, thesaurus, countIds, neighbours),
+                new NeighbourMasks(counts, 2, HeadClass.NOUN, thesaurus, countIds, neighbours)};
     }
 
     @Override
@@ -83,12 +90,17 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     @Override
     public QuadrupleDecision decide(int v, int n1, int p, int n2) {
         Vocabulary w = counts.words();
-        return decideKeys(v, n1, p, n2, v > 0 ? w.word(v) : null, n1 > 0 ? w.word(n1) : null, n2 > 0 ? w.word(n2) : null, null);
+        return decideKeys(v, n1, p, n2, v > 0 ? w.word(v) : null, n1 > 0 ? w.word(n1) : null, n2 > 0 ? w.word(n2) : null, null, null);
     }
 
     /** Decides a quadruple of count ids whose normalized words are given too (so unseen words still find neighbours). */
     QuadrupleDecision decide(int v, int n1, int p, int n2, String verbKey, String nounKey, String objectKey) {
-        return decideKeys(v, n1, p, n2, verbKey, nounKey, objectKey, null);
+        return decideKeys(v, n1, p, n2, verbKey, nounKey, objectKey, null, null);
+    }
+
+    /** As {@link #decide(int, int, int, int, String, String, String)}, given the plain back-off's decision of the same quadruple. */
+    QuadrupleDecision decide(int v, int n1, int p, int n2, String verbKey, String nounKey, String objectKey, QuadrupleDecision plainDecision) {
+        return decideKeys(v, n1, p, n2, verbKey, nounKey, objectKey, null, plainDecision);
     }
 
     /** Decides a quadruple given as words in the text (normalized here). */
@@ -103,7 +115,7 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         String n2 = normalizer.noun(q.noun2());
         Vocabulary w = counts.words();
         return decideKeys(w.id(v), w.id(n1), counts.prepositions().id(normalizer.preposition(q.preposition())), w.id(n2),
-                v, n1, n2, deciders);
+                v, n1, n2, deciders, null);
     }
 
     /** The neighbours that decided {@code q}, heaviest first, as "slot word→neighbour (weight)"; empty when none did. */
@@ -113,8 +125,9 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         return deciders;
     }
 
-    private QuadrupleDecision decideKeys(int v, int n1, int p, int n2, String vk, String n1k, String n2k, List<String> deciders) {
-        QuadrupleDecision base = plain.decide(v, n1, p, n2);
+    private QuadrupleDecision decideKeys(int v, int n1, int p, int n2, String vk, String n1k, String n2k, List<String> deciders,
+                                         QuadrupleDecision plainDecision) {
+        QuadrupleDecision base = plainDecision != null ? plainDecision : plain.decide(v, n1, p, n2);
         if (p <= 0 || base.basis() == DecisionBasis.QUADRUPLE
                 || (base.basis() == DecisionBasis.TRIPLES && base.count() >= minTripleTrials)) {
             return base;
@@ -172,7 +185,13 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         int t = thesaurus.id(wordClass, key);
         if (t == Thesaurus.UNKNOWN) return;
         int k = Math.min(neighbours, thesaurus.neighbourCount(t));
+        // Only the neighbours the counts saw in this slot with this preposition can add anything; in neighbour order.
+        long mask = seen[slot].mask(t, p);
         for (int i = 0; i < k; i++) {
+            if (i < 64 && (mask & (1L << i)) == 0) {
+                if ((mask >>> i) == 0) break;
+                continue;
+            }
             int nt = thesaurus.neighbourId(t, i);
             double score = thesaurus.neighbourScore(t, i);
             if (!(score > 0)) continue;
