@@ -50,6 +50,10 @@ public class ResolutionThroughput {
     @Param({""})
     public String conllu;
 
+    /** The model the resolvers and the whole pipeline load: "default" or a model file ({@code -p model=A,B} compares several in one run). */
+    @Param({"default"})
+    public String model;
+
     private final List<String> texts = new ArrayList<>();
     private final List<JCas> tagged = new ArrayList<>();
     private JCas scratch;
@@ -79,12 +83,13 @@ public class ResolutionThroughput {
         AnalysisEngine preprocessor = AnalysisEngineFactory.createEngine(TextPreprocessor.class);
         resolution = AnalysisEngineFactory.createEngine(AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
-                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class)));
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model)));
         countResolution = AnalysisEngineFactory.createEngine(AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class),
-                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_SCORER, "counts")));
-        coordination = AnalysisEngineFactory.createEngine(TetherPipeline.coordination("default"));
-        whole = TetherPipeline.createForRawText("default");
+                AnalysisEngineFactory.createEngineDescription(AttachmentResolver.class, AttachmentResolver.PARAM_MODEL, model,
+                        AttachmentResolver.PARAM_SCORER, "counts")));
+        coordination = AnalysisEngineFactory.createEngine(TetherPipeline.coordination(model));
+        whole = TetherPipeline.createForRawText(model);
         for (String text : texts) {
             JCas jcas = preprocessor.newJCas();
             jcas.setDocumentLanguage("en");
