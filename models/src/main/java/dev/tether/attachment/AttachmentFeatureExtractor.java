@@ -55,6 +55,8 @@ public final class AttachmentFeatureExtractor {
     private final SimilarityBackedOffScorer similarQuadruples;
     /** The two-word pools summed once, and which neighbours the three-word pools need to look up. */
     private final SimilarWordPools pools;
+    /** For each head class and word id in {@code statistics}, the word's thesaurus id (or UNKNOWN): no string lookup for counted words. */
+    private final int[][] entryOfCounted;
 
     public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
                                       WordNormalizer normalizer, Set<AttachmentFeatureFamily> families) {
@@ -80,12 +82,34 @@ public final class AttachmentFeatureExtractor {
             this.similarQuadruples = new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer, NEIGHBOURS,
                     SimilarityBackedOffScorer.MIN_TRIPLE_TRIALS, SimilarityBackedOffScorer.POWER, SimilarityBackedOffScorer.PAIR_BLEND);
             this.pools = new SimilarWordPools(statistics, thesaurus, statisticsIds, NEIGHBOURS);
+            this.entryOfCounted = thesaurusIds(statistics.words(), thesaurus);
         } else {
             this.thesaurus = null;
             this.statisticsIds = null;
             this.similarQuadruples = null;
             this.pools = null;
+            this.entryOfCounted = null;
         }
+    }
+
+    /** For each head class the thesaurus holds and each word id of {@code words}: the word's thesaurus id, or UNKNOWN. */
+    static int[][] thesaurusIds(dev.tether.vocabulary.Vocabulary words, Thesaurus thesaurus) {
+        int[][] ids = new int[HeadClass.values().length][];
+        for (HeadClass c : HeadClass.values()) {
+            if (thesaurus.size(c) == 0) continue;
+            int[] of = new int[words.size() + 1];
+            of[0] = Thesaurus.UNKNOWN;
+            for (int w = 1; w < of.length; w++) of[w] = thesaurus.id(c, words.word(w));
+            ids[c.ordinal()] = of;
+        }
+        return ids;
+    }
+
+    /** The thesaurus id of a word of class {@code c}: by its count id {@code w} when it has one, else by its key. */
+    private int entry(HeadClass c, int w, String key) {
+        int[] of = entryOfCounted[c.ordinal()];
+        if (of == null) return Thesaurus.UNKNOWN;
+        return w > 0 ? of[w] : thesaurus.id(c, key);
     }
 
     /** The pools summed at load, null without a thesaurus (for tests). */
@@ -162,7 +186,7 @@ public final class AttachmentFeatureExtractor {
         if (thesaurus != null) {
             sp = Math.max(0, statistics.prepositions().id(prepositionKey));
             so = Math.max(0, statistics.words().id(objectKey));
-            objectEntry = thesaurus.id(HeadClass.NOUN, objectKey);
+            objectEntry = entry(HeadClass.NOUN, so, objectKey);
         }
         double[] pool = new double[2];
 
@@ -217,12 +241,13 @@ public final class AttachmentFeatureExtractor {
                 out.add(AttachmentFeature.SIMILAR_QUADRUPLE_ESTIMATE.key(similarBasis, side, 0), side == 1 ? logit : -logit);
             }
             if (thesaurus != null && sp > 0) {
-                int headEntry = thesaurus.id(hc, headKey);
                 int sh = headKeys[i] != null ? headIds[i] : Math.max(0, statistics.words().id(headKey));
+                int headEntry = entry(hc, sh, headKey);
                 int headPool = headEntry == Thesaurus.UNKNOWN ? -1 : pools.head(headEntry, sp, c);
                 int objectPool = objectEntry == Thesaurus.UNKNOWN ? -1 : pools.object(objectEntry, sp, c);
                 for (int slot = AttachmentFeature.SIMILAR_HEAD; slot <= AttachmentFeature.SIMILAR_CLASS_OBJECT; slot++) {
-                    if (!pooled(slot, sp, c, sh, headEntry, headPool, so, objectEntry, objectPool, pool)) continue;
+                    if (!pooled(slot, sp, c, sh, headEntry, headPool, so, objectEntry, objectPool,
+                            entries[i][Part.HEAD.ordinal()], entries[i][Part.CLASS_OBJECT.ordinal()], pool)) continue;
                     int seen = seenBucket(entries[i][exactPart(slot).ordinal()]);
                     out.add(AttachmentFeature.SIMILAR_LOG_ODDS.key(slot, seen, c), Math.log((pool[0] + 0.5) / (pool[1] - pool[0] + 0.5)));
                     out.add(AttachmentFeature.SIMILAR_TRIALS.key(slot, seen, c), Math.log1p(pool[1]));
@@ -297,10 +322,12 @@ public final class AttachmentFeatureExtractor {
      * What {@link #pool} gives, the same doubles, from the pools summed at load ({@link SimilarWordPools}): the
      * two-word slots are one lookup, and the three-word slots look up only the neighbours that have two-word cases.
      * {@code headPool} and {@code objectPool} are the pools of the candidate and of the object for this preposition
-     * and class (-1: none).
+     * and class (-1: none); {@code headPair} and {@code objectPair} the exact entries of the candidate with the
+     * preposition and of its class with the object ({@link TupleCounts#ABSENT}: none), without which no neighbour
+     * can have a three-word entry either.
      */
     boolean pooled(int slot, int sp, int c, int sh, int headEntry, int headPool, int so, int objectEntry, int objectPool,
-                   double[] out) {
+                   long headPair, long objectPair, double[] out) {
         out[0] = 0;
         out[1] = 0;
         switch (slot) {
@@ -316,9 +343,11 @@ public final class AttachmentFeatureExtractor {
                 return out[1] > 0;
             case AttachmentFeature.SIMILAR_HEAD_WITH_OBJECT:
                 if (headEntry == Thesaurus.UNKNOWN || so == 0) return false;
+                if (objectPair == TupleCounts.ABSENT && pools.pairsHold()) return false;
                 return poolTriples(headEntry, pools.mask(true, headPool), statistics.lexical(sp, Part.HEAD_OBJECT), c, sh, so, true, out);
             default:
                 if (objectEntry == Thesaurus.UNKNOWN || sh == 0) return false;
+                if (headPair == TupleCounts.ABSENT && pools.pairsHold()) return false;
                 return poolTriples(objectEntry, pools.mask(false, objectPool), statistics.lexical(sp, Part.HEAD_OBJECT), c, sh, so, false, out);
         }
     }

@@ -98,17 +98,19 @@ public final class AttachmentRanker {
         if (best < 0 || second < 0) return reasons;
         // Each feature's pull: its weight times (value for the best - value for the runner-up), over the union of the
         // two candidates' keys, by a merge of their entries sorted by key.
-        long[] bk = sortedKeys(f, best);
-        long[] sk = sortedKeys(f, second);
-        long[] keys = new long[bk.length + sk.length];
+        SortedFeatures b = SortedFeatures.of(f, best);
+        SortedFeatures o = SortedFeatures.of(f, second);
+        long[] keys = new long[b.keys.length + o.keys.length];
         double[] pull = new double[keys.length];
+        double[] ofBestValue = new double[keys.length];
         int k = 0;
-        for (int i = 0, j = 0; i < bk.length || j < sk.length; ) {
-            long key = j >= sk.length || (i < bk.length && bk[i] <= sk[j]) ? bk[i] : sk[j];
-            while (i < bk.length && bk[i] == key) i++;
-            while (j < sk.length && sk[j] == key) j++;
+        for (int i = 0, j = 0; i < b.keys.length || j < o.keys.length; ) {
+            long key = j >= o.keys.length || (i < b.keys.length && b.keys[i] <= o.keys[j]) ? b.keys[i] : o.keys[j];
+            double vb = i < b.keys.length && b.keys[i] == key ? b.values[i++] : 0;
+            double vs = j < o.keys.length && o.keys[j] == key ? o.values[j++] : 0;
             keys[k] = key;
-            pull[k++] = weights.weightOf(key) * (f.valueOf(best, key) - f.valueOf(second, key));
+            ofBestValue[k] = vb;
+            pull[k++] = weights.weightOf(key) * (vb - vs);
         }
         boolean[] used = new boolean[k];
         for (int r = 0; r < limit; r++) {
@@ -116,7 +118,7 @@ public final class AttachmentRanker {
             for (int j = 0; j < k; j++) if (!used[j] && pull[j] > 1e-9 && (top < 0 || pull[j] > pull[top])) top = j;
             if (top < 0) break;
             used[top] = true;
-            boolean ofBest = f.valueOf(best, keys[top]) != 0;
+            boolean ofBest = ofBestValue[top] != 0;
             String text = AttachmentFeature.describe(keys[top], q, ofBest ? best : second);
             List<String> neighbours = extractor.neighboursBehind(keys[top], q, ofBest ? best : second, 3);
             if (!neighbours.isEmpty()) text += ", neighbours " + String.join(", ", neighbours);
@@ -157,11 +159,23 @@ public final class AttachmentRanker {
         return s.append(rest);
     }
 
-    private static long[] sortedKeys(CandidateFeatures f, int candidate) {
-        long[] keys = new long[f.to(candidate) - f.from(candidate)];
-        for (int e = f.from(candidate); e < f.to(candidate); e++) keys[e - f.from(candidate)] = f.key(e);
-        java.util.Arrays.sort(keys);
-        return keys;
+    /**
+     * One candidate's features as distinct keys in ascending order with their values, a key's entries added in the
+     * order they were extracted (as {@link CandidateFeatures#valueOf} adds them), in O(n log n).
+     */
+    private record SortedFeatures(long[] keys, double[] values) {
+        static SortedFeatures of(CandidateFeatures f, int candidate) {
+            int from = f.from(candidate), to = f.to(candidate);
+            long[] all = new long[to - from];
+            for (int e = from; e < to; e++) all[e - from] = f.key(e);
+            java.util.Arrays.sort(all);
+            int distinct = 0;
+            for (int i = 0; i < all.length; i++) if (i == 0 || all[i] != all[i - 1]) all[distinct++] = all[i];
+            long[] keys = java.util.Arrays.copyOf(all, distinct);
+            double[] values = new double[distinct];
+            for (int e = from; e < to; e++) values[java.util.Arrays.binarySearch(keys, f.key(e))] += f.value(e);
+            return new SortedFeatures(keys, values);
+        }
     }
 
     /** Writes the ranker's version, families and weights (a model file section). */

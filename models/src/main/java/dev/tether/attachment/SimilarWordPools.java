@@ -67,6 +67,11 @@ final class SimilarWordPools {
         return (ofHead ? heads.mask[pool] : objects.mask[pool]) & 0xFFFFFFFFL;
     }
 
+    /** Whether every three-word entry has its two two-word entries (so a missing pair rules its triples out). */
+    boolean pairsHold() {
+        return masksHold;
+    }
+
     /** Approximate heap bytes of the pools. */
     long approximateBytes() {
         return heads.approximateBytes() + objects.approximateBytes();

@@ -49,6 +49,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private final double pairBlend;
     /** For each thesaurus id, the word's id in the counts (0 when the counts never saw it). */
     private final int[] countIds;
+    /** For each class and count word id, the word's thesaurus id (no string lookup for words the counts saw). */
+    private final int[][] entryOfCounted;
     /** Per slot (verb, first noun, object), which neighbours the counts saw there with each preposition. */
     private final NeighbourMasks[] seen;
 
@@ -75,6 +77,7 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         this.minTripleTrials = minTripleTrials;
         this.countIds = new int[thesaurus.size()];
         for (int t = 0; t < countIds.length; t++) countIds[t] = Math.max(0, counts.words().id(thesaurus.key(t)));
+        this.entryOfCounted = AttachmentFeatureExtractor.thesaurusIds(counts.words(), thesaurus);
         this.seen = new NeighbourMasks[] {
                 new NeighbourMasks(counts, 0, HeadClass.VERB, thesaurus, countIds, neighbours),
                 new NeighbourMasks(counts, 1, HeadClass.NOUN, thesaurus, countIds, neighbours),
@@ -139,9 +142,9 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
             triples[1] = base.count();
         }
         List<Contribution> contributions = deciders == null ? null : new ArrayList<>();
-        substitute(0, HeadClass.VERB, vk, v, n1, p, n2, quad, triples, contributions);
-        substitute(1, HeadClass.NOUN, n1k, v, n1, p, n2, quad, triples, contributions);
-        substitute(2, HeadClass.NOUN, n2k, v, n1, p, n2, quad, triples, contributions);
+        substitute(0, HeadClass.VERB, vk, v, v, n1, p, n2, quad, triples, contributions);
+        substitute(1, HeadClass.NOUN, n1k, n1, v, n1, p, n2, quad, triples, contributions);
+        substitute(2, HeadClass.NOUN, n2k, n2, v, n1, p, n2, quad, triples, contributions);
         QuadrupleDecision d;
         if (quad[1] > 0) d = decision(quad, DecisionBasis.SIMILAR_QUADRUPLES);
         else if (triples[1] > 0 && triples[1] > (base.basis() == DecisionBasis.TRIPLES ? base.count() : 0)) {
@@ -179,10 +182,11 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     }
 
     /** Adds the evidence of the quadruple with word {@code slot} replaced by each of its neighbours. */
-    private void substitute(int slot, HeadClass wordClass, String key, int v, int n1, int p, int n2,
+    private void substitute(int slot, HeadClass wordClass, String key, int countId, int v, int n1, int p, int n2,
                             double[] quad, double[] triples, List<Contribution> contributions) {
         if (key == null) return;
-        int t = thesaurus.id(wordClass, key);
+        int[] counted = entryOfCounted[wordClass.ordinal()];
+        int t = counted == null ? Thesaurus.UNKNOWN : countId > 0 ? counted[countId] : thesaurus.id(wordClass, key);
         if (t == Thesaurus.UNKNOWN) return;
         int k = Math.min(neighbours, thesaurus.neighbourCount(t));
         // Only the neighbours the counts saw in this slot with this preposition can add anything; in neighbour order.

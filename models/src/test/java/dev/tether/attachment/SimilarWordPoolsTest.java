@@ -2,8 +2,11 @@ package dev.tether.attachment;
 
 import dev.tether.candidates.HeadClass;
 import dev.tether.counts.HeadChoiceCounts;
+import dev.tether.counts.HeadChoiceCounts.Part;
 import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.counts.QuadrupleCountsBuilder;
+import dev.tether.counts.TupleCounts;
+import dev.tether.counts.TupleKey;
 import dev.tether.similarity.FerryLogCorpus;
 import dev.tether.similarity.Thesaurus;
 import dev.tether.similarity.ThesaurusBuilder;
@@ -49,6 +52,7 @@ class SimilarWordPoolsTest {
                 statistics, normalizer, EnumSet.allOf(AttachmentFeatureFamily.class), thesaurus);
         SimilarWordPools pools = extractor.pools();
         assertTrue(pools.size() > 0);
+        assertTrue(pools.pairsHold(), "every event is counted at every level");
 
         int[] found = new int[4];
         double[] fast = new double[2];
@@ -64,7 +68,9 @@ class SimilarWordPoolsTest {
                     int objectPool = object < 0 ? -1 : pools.object(object, sp, c);
                     for (int slot = AttachmentFeature.SIMILAR_HEAD; slot <= AttachmentFeature.SIMILAR_CLASS_OBJECT; slot++) {
                         int objectEntry = object < 0 ? Thesaurus.UNKNOWN : object;
-                        boolean a = extractor.pooled(slot, sp, c, sh, head, headPool, so, objectEntry, objectPool, fast);
+                        long headPair = sh == 0 ? TupleCounts.ABSENT : statistics.lexical(sp, Part.HEAD).find(TupleKey.of(sh, c + 1));
+                        long objectPair = so == 0 ? TupleCounts.ABSENT : statistics.lexical(sp, Part.CLASS_OBJECT).find(TupleKey.of(c + 1, so));
+                        boolean a = extractor.pooled(slot, sp, c, sh, head, headPool, so, objectEntry, objectPool, headPair, objectPair, fast);
                         boolean b = extractor.pool(slot, sp, c, sh, head, so, objectEntry, slow, null);
                         String where = "slot " + slot + ", preposition " + sp + ", head " + thesaurus.key(head)
                                 + ", object " + (object < 0 ? "none" : thesaurus.key(object));
