@@ -78,6 +78,11 @@ final class InspectCommand implements Command {
         out.printf("  class                %,10d%n", h.distinct(HeadChoiceCounts.Part.CLASS));
         RankerSummary.print(m, out);
         out.printf("approximate heap of the count tables: %.1f MB%n", (q.approximateBytes() + h.approximateBytes()) / 1e6);
+        out.println(m.thesaurus().map(t -> String.format("thesaurus      %,d words (%,d nouns, %,d verbs, %,d adjectives), %d neighbours per word%s; approximate heap %.1f MB",
+                        t.size(), t.size(dev.tether.candidates.HeadClass.NOUN), t.size(dev.tether.candidates.HeadClass.VERB),
+                        t.size(dev.tether.candidates.HeadClass.ADJECTIVE), t.settings().neighbours(),
+                        t.hasVectors() ? ", with vectors" : ", lists only (the coordination features do without it)", t.approximateBytes() / 1e6))
+                .orElse("thesaurus      none (the similar-words features are off)"));
         out.println(m.tagger().map(t -> String.format("tagger         %s (%,d bytes)", t.description(), t.size()))
                 .orElse("tagger         none (the built-in preprocessing uses the shipped OpenNLP tagger)"));
         DomainReportText.print(m, out);

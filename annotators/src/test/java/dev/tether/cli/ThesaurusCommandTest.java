@@ -162,5 +162,16 @@ class ThesaurusCommandTest {
         CommandLineRun e = CommandLineRun.of("thesaurus", "evaluate", "--thesaurus", lists.toString(), "--pairs", pairs.toString());
         assertEquals(Tether.USAGE, e.exitCode(), e.toString());
         assertTrue(e.err().contains(lists + " keeps neighbour lists only"), e.err());
+
+        // A model trained with it carries it, and says so.
+        Path quadruples = dir.resolve("ferry.quadruples");
+        Files.writeString(quadruples, "1 replaced gasket on pump V\n2 inspected valve of engine N\n3 fitted seal with wrench V\n");
+        Path model = dir.resolve("lists.tether");
+        CommandLineRun train = CommandLineRun.of("train", "--quadruples", quadruples.toString(), "--thesaurus", lists.toString(),
+                "--out", model.toString());
+        assertEquals(Tether.OK, train.exitCode(), train.toString());
+        assertTrue(train.out().contains("lists only"), train.out());
+        CommandLineRun inspect = CommandLineRun.of("inspect", model.toString());
+        assertTrue(inspect.out().contains("5 neighbours per word, lists only"), inspect.out());
     }
 }
