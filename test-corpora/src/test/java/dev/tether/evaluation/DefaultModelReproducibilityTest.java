@@ -19,12 +19,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * by:
  * <pre>
  * ./tether train --quadruples test-corpora/data/rrr/training \
- *     --conllu test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz --out models/src/main/resources/dev/tether/model/default.tether
+ *     --conllu test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz --thesaurus test-corpora/data/thesaurus/raw-text.thesaurus \
+ *     --out models/src/main/resources/dev/tether/model/default.tether
  * </pre>
  * This test runs that same command (same entry point, same arguments, paths relative to this module) into a
  * temporary file and compares the bytes with the resource on the classpath. Sources: the prepositional attachment
  * quadruples of Ratnaparkhi, Reynar &amp; Roukos (1994) (data/rrr) and the train split of Universal Dependencies
- * English EWT (Silveira et al. 2014, CC BY-SA 4.0; data/ud-ewt). A model records its sources by file name and
+ * English EWT (Silveira et al. 2014, CC BY-SA 4.0; data/ud-ewt), and a thesaurus of neighbour lists counted from the
+ * project's development raw text (data/thesaurus, whose README gives the command and the text's sources). A model records its sources by file name and
  * SHA-256, so the relative paths do not change its bytes.
  */
 class DefaultModelReproducibilityTest {
@@ -37,6 +39,7 @@ class DefaultModelReproducibilityTest {
         CommandLineEntry run = CommandLineEntry.run("train",
                 "--quadruples", "data/rrr/training",
                 "--conllu", "data/ud-ewt/en_ewt-ud-train.conllu.gz",
+                "--thesaurus", "data/thesaurus/raw-text.thesaurus",
                 "--out", retrained.toString());
         assertEquals(0, run.exitCode(), run::toString);
 

@@ -55,34 +55,35 @@ class EwtDevSliceEndToEndTest {
     }
 
     /*
-     * Floors. Measured with the shipped default model and its learned ranker (December 2026, model 5d7066160f60, whose attachment
-     * ranker is be8ffe111ee2's):
-     * attachment 442 of 547 = 0.808 (Wilson 95% interval 0.773-0.839); in the same run the count-based score the
+     * Floors. Measured with the shipped default model and its learned ranker (December 2026, model 013e441a5047, the
+     * sources of 5d7066160f60 with the thesaurus of data/thesaurus):
+     * attachment 448 of 547 = 0.819 (Wilson 95% interval 0.785-0.849); in the same run the count-based score the
      * ranker replaced 425 = 0.777, nearest noun-or-verb 340 = 0.622, verb-or-first-noun 346 = 0.633, candidate recall
-     * 523 = 0.956. (Before the ranker the default model measured 416 = 0.761.) The run is deterministic, so the floors guard against
+     * 523 = 0.956. (Before the thesaurus the default model measured 442 = 0.808; before the ranker 416 = 0.761.) The
+     * run is deterministic, so the floors guard against
      * regressions, not against sampling: each sits about two standard errors of a proportion at this n (common
      * practice for a regression floor) below the measured value, so a retrained model that differs by what 547
      * items cannot tell apart still passes, and a real loss does not.
      */
 
-    /** 0.808 measured; 0.77 lets 21 decisions (3.8 points, about 2 standard errors) go, inside the 95% interval. */
-    private static final double ACCURACY_FLOOR = 0.77;
+    /** 0.819 measured; 0.78 lets 21 decisions (3.9 points, about 2 standard errors of 1.6 points) go, inside the 95% interval. */
+    private static final double ACCURACY_FLOOR = 0.78;
     /**
-     * 18.6 points measured over nearest-noun-or-verb (17.5 over verb-or-first-noun). The standard error of a
+     * 19.7 points measured over nearest-noun-or-verb (18.6 over verb-or-first-noun). The standard error of a
      * difference of two proportions near these values at n = 547 is at most 2.8 points even treated as unpaired
      * (paired items make it smaller), so 1.96 of them is 5.4 points: a margin of 10 points (the issue's target on
      * the whole dev split) keeps the gain clearly beyond chance while leaving room for retraining.
      */
     private static final double MARGIN_OVER_BASELINES = 0.10;
     /**
-     * 3.1 points measured over the count-based score on the same candidates. Both choose among the same candidates,
+     * 4.2 points measured over the count-based score on the same candidates (3.1 before the thesaurus). Both choose among the same candidates,
      * so the comparison is paired and its spread is that of the decisions where they differ; retraining has moved
      * single figures on this slice by about half a point. The ranker must stay at least 1.5 points ahead.
      */
     private static final double MARGIN_OVER_COUNT_SCORE = 0.015;
     /** 0.956 measured end to end (523 of 547); 0.92 lets 20 heads (about 2 standard errors) go. */
     private static final double CANDIDATE_RECALL_FLOOR = 0.92;
-    /** Verb heads 0.841 (n = 232, SE 2.4 points), noun heads 0.778 (n = 275, SE 2.5): both held at 0.70. */
+    /** Verb heads 0.845 (n = 232, SE 2.4 points), noun heads 0.796 (n = 275, SE 2.4): both held at 0.70. */
     private static final double HEAD_CLASS_FLOOR = 0.70;
 
     @Test
@@ -129,7 +130,7 @@ class EwtDevSliceEndToEndTest {
 
     /*
      * Coordination scope on the same run (the coordination resolver is in the raw-text pipeline). Measured with the
-     * shipped default model 5d7066160f60 (December 2026): 180 gold coordinations in the slice (a cc whose head is a
+     * shipped default model 013e441a5047, whose coordination ranker is 5d7066160f60's (December 2026): 180 gold coordinations in the slice (a cc whose head is a
      * conj); both conjunct heads right for 110 = 0.611 (Wilson 95% interval 0.538-0.679); the nearest word before the
      * coordinator with the last conjunct's class (as the pipeline tagged it), same run, 74 = 0.411. Scope decisions on
      * the gold modifiers the pipeline decided: 77 of 79 right, against never-shared 60 = 0.759 and always-shared 0.241.

@@ -13,6 +13,8 @@ import dev.tether.pipeline.TetherPipeline;
 import dev.tether.ranking.Lbfgs;
 import dev.tether.ranking.RankerModel;
 import dev.tether.ranking.RankerTrainer;
+import dev.tether.similarity.Thesaurus;
+import dev.tether.similarity.ThesaurusFile;
 import dev.tether.treebank.TreebankExampleExtractor;
 import dev.tether.treebank.TreebankExamples;
 import org.apache.uima.analysis_engine.AnalysisEngine;
@@ -26,7 +28,8 @@ import java.util.Locale;
 
 /**
  * A measurement, not a test: trains the default model's sources (RRR training quadruples of Ratnaparkhi, Reynar
- * &amp; Roukos 1994; UD English EWT train, Silveira et al. 2014) with each ranker feature family removed in turn, and
+ * &amp; Roukos 1994; UD English EWT train, Silveira et al. 2014; the thesaurus of {@code test-corpora/data/thesaurus})
+ * with each ranker feature family removed in turn, and
  * with 25/50/75/100% of the EWT training examples, and scores every model on EWT dev end to end (raw text) and with
  * gold tags, beside the count-based score of the same run. Every model carries the same tagger, trained once on EWT
  * train as the default model's is. Reads the dev split from {@code ../shared/datasets}.
@@ -40,6 +43,7 @@ import java.util.Locale;
  */
 public final class RankerAblation {
     private static TaggerSection tagger;
+    private static Thesaurus thesaurus;
 
     private RankerAblation() {
     }
@@ -59,6 +63,7 @@ public final class RankerAblation {
         TreebankTaggerTrainer taggerTrainer = new TreebankTaggerTrainer();
         taggerTrainer.add(root.resolve("test-corpora/data/ud-ewt/en_ewt-ud-train.conllu.gz"));
         tagger = taggerTrainer.train();
+        thesaurus = ThesaurusFile.read(root.resolve("test-corpora/data/thesaurus/raw-text.thesaurus"));
         System.out.printf("%-28s %9s %9s %9s %9s %9s %9s%n", "configuration", "e2e", "e2e-count", "gold-tags", "gold-count",
                 "cv-loss", "train-s");
         for (String w : what) {
@@ -89,7 +94,7 @@ public final class RankerAblation {
     private static void run(String name, EnumSet<AttachmentFeatureFamily> families, double share, QuadrupleSet rrr,
                             TreebankExamples ewt, TreebankExamples devGold, Path dev, boolean quick) throws Exception {
         long start = System.nanoTime();
-        ModelTrainer trainer = new ModelTrainer().rankerFamilies(families).withTagger(tagger);
+        ModelTrainer trainer = new ModelTrainer().rankerFamilies(families).withTagger(tagger).withThesaurus(thesaurus);
         if (quick) trainer.rankerTrainer(new RankerTrainer(new double[] {10}, 1, new Lbfgs(400, 1e-7)));
         trainer.addQuadruples(rrr);
         trainer.addTreebank(share < 1 ? ewt.firstShare(share) : ewt, "en_ewt-ud-train.conllu.gz", "-");
