@@ -50,13 +50,11 @@ public final class AttachmentFeatureExtractor {
     private final String[] lightVerbKeys = new String[AttachmentFeature.LIGHT_VERBS.length];
     /** Null without a thesaurus (or with the similar-words family off). */
     private final Thesaurus thesaurus;
-    /** For each thesaurus id, the word's id in {@code statistics} (0 when the statistics never saw it). */
-    private final int[] statisticsIds;
+    /** The thesaurus's words' ids in {@code statistics}, and back. */
+    private final ThesaurusIds statisticsIds;
     private final SimilarityBackedOffScorer similarQuadruples;
     /** The two-word pools summed once, and which neighbours the three-word pools need to look up. */
     private final SimilarWordPools pools;
-    /** For each head class and word id in {@code statistics}, the word's thesaurus id (or UNKNOWN): no string lookup for counted words. */
-    private final int[][] entryOfCounted;
 
     public AttachmentFeatureExtractor(HeadChoiceCounts statistics, QuadrupleCounts quadruples, HeadChoiceCounts lexicon,
                                       WordNormalizer normalizer, Set<AttachmentFeatureFamily> families) {
@@ -77,39 +75,16 @@ public final class AttachmentFeatureExtractor {
         for (int i = 1; i < lightVerbKeys.length; i++) lightVerbKeys[i] = normalizer.verb(AttachmentFeature.LIGHT_VERBS[i]);
         if (thesaurus != null && families.contains(AttachmentFeatureFamily.SIMILAR_WORDS)) {
             this.thesaurus = thesaurus;
-            this.statisticsIds = new int[thesaurus.size()];
-            for (int t = 0; t < statisticsIds.length; t++) statisticsIds[t] = Math.max(0, statistics.words().id(thesaurus.key(t)));
+            this.statisticsIds = new ThesaurusIds(statistics.words(), thesaurus);
             this.similarQuadruples = new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer, NEIGHBOURS,
                     SimilarityBackedOffScorer.MIN_TRIPLE_TRIALS, SimilarityBackedOffScorer.POWER, SimilarityBackedOffScorer.PAIR_BLEND);
             this.pools = new SimilarWordPools(statistics, thesaurus, statisticsIds, NEIGHBOURS);
-            this.entryOfCounted = thesaurusIds(statistics.words(), thesaurus);
         } else {
             this.thesaurus = null;
             this.statisticsIds = null;
             this.similarQuadruples = null;
             this.pools = null;
-            this.entryOfCounted = null;
         }
-    }
-
-    /** For each head class the thesaurus holds and each word id of {@code words}: the word's thesaurus id, or UNKNOWN. */
-    static int[][] thesaurusIds(dev.tether.vocabulary.Vocabulary words, Thesaurus thesaurus) {
-        int[][] ids = new int[HeadClass.values().length][];
-        for (HeadClass c : HeadClass.values()) {
-            if (thesaurus.size(c) == 0) continue;
-            int[] of = new int[words.size() + 1];
-            of[0] = Thesaurus.UNKNOWN;
-            for (int w = 1; w < of.length; w++) of[w] = thesaurus.id(c, words.word(w));
-            ids[c.ordinal()] = of;
-        }
-        return ids;
-    }
-
-    /** The thesaurus id of a word of class {@code c}: by its count id {@code w} when it has one, else by its key. */
-    private int entry(HeadClass c, int w, String key) {
-        int[] of = entryOfCounted[c.ordinal()];
-        if (of == null) return Thesaurus.UNKNOWN;
-        return w > 0 ? of[w] : thesaurus.id(c, key);
     }
 
     /** The pools summed at load, null without a thesaurus (for tests). */
@@ -186,7 +161,7 @@ public final class AttachmentFeatureExtractor {
         if (thesaurus != null) {
             sp = Math.max(0, statistics.prepositions().id(prepositionKey));
             so = Math.max(0, statistics.words().id(objectKey));
-            objectEntry = entry(HeadClass.NOUN, so, objectKey);
+            objectEntry = statisticsIds.entry(HeadClass.NOUN, so, objectKey);
         }
         double[] pool = new double[2];
 
@@ -242,7 +217,7 @@ public final class AttachmentFeatureExtractor {
             }
             if (thesaurus != null && sp > 0) {
                 int sh = headKeys[i] != null ? headIds[i] : Math.max(0, statistics.words().id(headKey));
-                int headEntry = entry(hc, sh, headKey);
+                int headEntry = statisticsIds.entry(hc, sh, headKey);
                 int headPool = headEntry == Thesaurus.UNKNOWN ? -1 : pools.head(headEntry, sp, c);
                 int objectPool = objectEntry == Thesaurus.UNKNOWN ? -1 : pools.object(objectEntry, sp, c);
                 for (int slot = AttachmentFeature.SIMILAR_HEAD; slot <= AttachmentFeature.SIMILAR_CLASS_OBJECT; slot++) {
@@ -360,7 +335,7 @@ public final class AttachmentFeatureExtractor {
             if (j >= k) break;
             double s = thesaurus.neighbourScore(entry, j);
             if (!(s > 0)) continue;
-            int w = statisticsIds[thesaurus.neighbourId(entry, j)];
+            int w = statisticsIds.countId(thesaurus.neighbourId(entry, j));
             if (w == 0) continue;
             long e = table.find(byHead ? TupleKey.of(w, c + 1, so) : TupleKey.of(sh, c + 1, w));
             if (e == TupleCounts.ABSENT) continue;
@@ -390,7 +365,7 @@ public final class AttachmentFeatureExtractor {
         for (int j = 0; j < k; j++) {
             double s = thesaurus.neighbourScore(entry, j);
             if (!(s > 0)) continue;
-            int w = statisticsIds[thesaurus.neighbourId(entry, j)];
+            int w = statisticsIds.countId(thesaurus.neighbourId(entry, j));
             if (w == 0) continue;
             long key;
             switch (slot) {

@@ -30,9 +30,9 @@ final class NeighbourMasks {
     /**
      * @param slot      0 verb, 1 first noun, 2 object
      * @param wordClass the class of the thesaurus words that stand in for that slot
-     * @param countIds  for each thesaurus id, the word's id in {@code counts} (0 when never seen)
+     * @param countIds  the thesaurus's words' ids in {@code counts}
      */
-    NeighbourMasks(QuadrupleCounts counts, int slot, HeadClass wordClass, Thesaurus thesaurus, int[] countIds, int neighbours) {
+    NeighbourMasks(QuadrupleCounts counts, int slot, HeadClass wordClass, Thesaurus thesaurus, ThesaurusIds countIds, int neighbours) {
         SubTuple single = slot == 0 ? SubTuple.VERB : slot == 1 ? SubTuple.NOUN1 : SubTuple.NOUN2;
         int prepositionCount = counts.prepositions().size() + 1;
         int words = counts.words().size() + 1;
@@ -72,7 +72,7 @@ final class NeighbourMasks {
             int touchedCount = 0;
             int k = Math.min(Math.min(neighbours, MASKED_NEIGHBOURS), thesaurus.neighbourCount(entry));
             for (int j = 0; j < k; j++) {
-                int w = countIds[thesaurus.neighbourId(entry, j)];
+                int w = countIds.countId(thesaurus.neighbourId(entry, j));
                 if (w == 0) continue;
                 for (int e = count[w]; e < count[w + 1]; e++) {
                     int p = seenWith[e];

@@ -23,8 +23,8 @@ import java.util.Arrays;
  * and thread-safe.
  */
 final class SimilarWordPools {
-    /** At most this many neighbours get a bit in a pool's mask; with more, {@link #mask} gives all bits set. */
-    static final int MASKED_NEIGHBOURS = 32;
+    /** At most this many neighbours get a bit in a pool's mask (as in {@link NeighbourMasks}); with more, {@link #mask} gives all bits set. */
+    static final int MASKED_NEIGHBOURS = NeighbourMasks.MASKED_NEIGHBOURS;
     private static final int CLASSES = HeadClass.values().length + 1;
 
     private final Pools heads;
@@ -32,10 +32,10 @@ final class SimilarWordPools {
     private final boolean masksHold;
 
     /**
-     * @param statisticsIds for each thesaurus id, the word's id in {@code statistics} (0 when never seen)
+     * @param statisticsIds the thesaurus's words' ids in {@code statistics}
      * @param neighbours    the nearest neighbours pooled per word
      */
-    SimilarWordPools(HeadChoiceCounts statistics, Thesaurus thesaurus, int[] statisticsIds, int neighbours) {
+    SimilarWordPools(HeadChoiceCounts statistics, Thesaurus thesaurus, ThesaurusIds statisticsIds, int neighbours) {
         int prepositions = statistics.prepositions().size() + 1;
         this.heads = new Pools(statistics, Part.HEAD, thesaurus, statisticsIds, neighbours, prepositions);
         this.objects = new Pools(statistics, Part.CLASS_OBJECT, thesaurus, statisticsIds, neighbours, prepositions);
@@ -107,7 +107,7 @@ final class SimilarWordPools {
         final double[] trials;
         final int[] mask;
 
-        Pools(HeadChoiceCounts statistics, Part part, Thesaurus thesaurus, int[] statisticsIds, int neighbours, int prepositions) {
+        Pools(HeadChoiceCounts statistics, Part part, Thesaurus thesaurus, ThesaurusIds statisticsIds, int neighbours, int prepositions) {
             boolean byHead = part == Part.HEAD;
             // The level's entries grouped by word (the head, or the object), each group in preposition then class order.
             int words = statistics.words().size() + 1;
@@ -154,7 +154,7 @@ final class SimilarWordPools {
                 for (int j = 0; j < k; j++) {
                     double s = thesaurus.neighbourScore(entry, j);
                     if (!(s > 0)) continue;
-                    int w = statisticsIds[thesaurus.neighbourId(entry, j)];
+                    int w = statisticsIds.countId(thesaurus.neighbourId(entry, j));
                     if (w == 0) continue;
                     for (int e = count[w]; e < count[w + 1]; e++) {
                         int code = entryCode[e];

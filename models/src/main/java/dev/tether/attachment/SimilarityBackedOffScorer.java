@@ -47,10 +47,8 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private final double minTripleTrials;
     private final double power;
     private final double pairBlend;
-    /** For each thesaurus id, the word's id in the counts (0 when the counts never saw it). */
-    private final int[] countIds;
-    /** For each class and count word id, the word's thesaurus id (no string lookup for words the counts saw). */
-    private final int[][] entryOfCounted;
+    /** The thesaurus's words' ids in the counts, and back. */
+    private final ThesaurusIds countIds;
     /** Per slot (verb, first noun, object), which neighbours the counts saw there with each preposition. */
     private final NeighbourMasks[] seen;
 
@@ -75,9 +73,7 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
         this.plain = new BackedOffScorer(counts);
         this.neighbours = neighbours;
         this.minTripleTrials = minTripleTrials;
-        this.countIds = new int[thesaurus.size()];
-        for (int t = 0; t < countIds.length; t++) countIds[t] = Math.max(0, counts.words().id(thesaurus.key(t)));
-        this.entryOfCounted = AttachmentFeatureExtractor.thesaurusIds(counts.words(), thesaurus);
+        this.countIds = new ThesaurusIds(counts.words(), thesaurus);
         this.seen = new NeighbourMasks[] {
                 new NeighbourMasks(counts, 0, HeadClass.VERB, thesaurus, countIds, neighbours),
                 new NeighbourMasks(counts, 1, HeadClass.NOUN, thesaurus, countIds, neighbours),
@@ -185,8 +181,7 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
     private void substitute(int slot, HeadClass wordClass, String key, int countId, int v, int n1, int p, int n2,
                             double[] quad, double[] triples, List<Contribution> contributions) {
         if (key == null) return;
-        int[] counted = entryOfCounted[wordClass.ordinal()];
-        int t = counted == null ? Thesaurus.UNKNOWN : countId > 0 ? counted[countId] : thesaurus.id(wordClass, key);
+        int t = countIds.entry(wordClass, countId, key);
         if (t == Thesaurus.UNKNOWN) return;
         int k = Math.min(neighbours, thesaurus.neighbourCount(t));
         // Only the neighbours the counts saw in this slot with this preposition can add anything; in neighbour order.
@@ -200,7 +195,7 @@ public final class SimilarityBackedOffScorer implements QuadrupleScorer {
             double score = thesaurus.neighbourScore(t, i);
             if (!(score > 0)) continue;
             double s = power == 1 ? score : Math.pow(score, power);
-            int id = countIds[nt];
+            int id = countIds.countId(nt);
             if (id == 0) continue;
             int sv = slot == 0 ? id : v, sn1 = slot == 1 ? id : n1, sn2 = slot == 2 ? id : n2;
             double qw = 0, tw = 0;

@@ -8,8 +8,6 @@ import dev.tether.counts.TupleCounts;
 import dev.tether.counts.TupleKey;
 import dev.tether.similarity.FerryLogCorpus;
 import dev.tether.similarity.Thesaurus;
-import dev.tether.similarity.ThesaurusBuilder;
-import dev.tether.similarity.ThesaurusSettings;
 import dev.tether.vocabulary.WordNormalizer;
 import org.junit.jupiter.api.Test;
 
@@ -31,8 +29,7 @@ class NeighbourMasksTest {
 
     @Test
     void aBitIsSetExactlyForTheNeighboursTheCountsSawInTheSlot() {
-        Thesaurus thesaurus = ThesaurusBuilder.build(FerryLogCorpus.count(600, 21),
-                ThesaurusSettings.DEFAULT.withMinFrequency(3).withNeighbours(20), 1);
+        Thesaurus thesaurus = FerryLogCorpus.thesaurus(600, 20);
         WordNormalizer normalizer = new WordNormalizer();
         QuadrupleCountsBuilder builder = new QuadrupleCountsBuilder();
         Random r = new Random(9);
@@ -42,8 +39,7 @@ class NeighbourMasksTest {
                     r.nextBoolean() ? dev.tether.attachment.AttachmentSite.NOUN : dev.tether.attachment.AttachmentSite.VERB, 1);
         }
         QuadrupleCounts counts = builder.build();
-        int[] countIds = new int[thesaurus.size()];
-        for (int t = 0; t < countIds.length; t++) countIds[t] = Math.max(0, counts.words().id(thesaurus.key(t)));
+        ThesaurusIds countIds = new ThesaurusIds(counts.words(), thesaurus);
         SubTuple[] singles = {SubTuple.VERB, SubTuple.NOUN1, SubTuple.NOUN2};
         HeadClass[] classes = {HeadClass.VERB, HeadClass.NOUN, HeadClass.NOUN};
         int set = 0, clear = 0;
@@ -55,7 +51,7 @@ class NeighbourMasksTest {
                     long mask = masks.mask(t, p);
                     TupleCounts single = counts.table(p, singles[slot]);
                     for (int j = 0; j < thesaurus.neighbourCount(t); j++) {
-                        int w = countIds[thesaurus.neighbourId(t, j)];
+                        int w = countIds.countId(thesaurus.neighbourId(t, j));
                         boolean seen = w != 0 && single.find(TupleKey.of(w)) != TupleCounts.ABSENT;
                         assertEquals(seen, (mask & (1L << j)) != 0, "slot " + slot + ", " + thesaurus.key(t) + ", neighbour " + j);
                         if (seen) set++;

@@ -9,8 +9,6 @@ import dev.tether.counts.TupleCounts;
 import dev.tether.counts.TupleKey;
 import dev.tether.similarity.FerryLogCorpus;
 import dev.tether.similarity.Thesaurus;
-import dev.tether.similarity.ThesaurusBuilder;
-import dev.tether.similarity.ThesaurusSettings;
 import dev.tether.vocabulary.WordNormalizer;
 import org.junit.jupiter.api.Test;
 
@@ -34,8 +32,7 @@ class SimilarWordPoolsTest {
 
     @Test
     void thePoolsSummedAtLoadEqualThePerCandidateSums() {
-        Thesaurus thesaurus = ThesaurusBuilder.build(FerryLogCorpus.count(600, 21),
-                ThesaurusSettings.DEFAULT.withMinFrequency(3).withNeighbours(20), 1);
+        Thesaurus thesaurus = FerryLogCorpus.thesaurus(600, 20);
         WordNormalizer normalizer = new WordNormalizer();
         HeadChoiceCountsBuilder counts = new HeadChoiceCountsBuilder();
         Random r = new Random(7);

@@ -2,8 +2,6 @@ package dev.tether.coordination;
 
 import dev.tether.similarity.FerryLogCorpus;
 import dev.tether.similarity.Thesaurus;
-import dev.tether.similarity.ThesaurusBuilder;
-import dev.tether.similarity.ThesaurusSettings;
 import dev.tether.vocabulary.WordNormalizer;
 import org.junit.jupiter.api.Test;
 
@@ -20,8 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class NeighbourListThesaurusTest {
     @Test
     void aThesaurusOfNeighbourListsOnlyCountsAsNone() {
-        Thesaurus full = ThesaurusBuilder.build(FerryLogCorpus.count(300, 21),
-                ThesaurusSettings.DEFAULT.withMinFrequency(3).withNeighbours(5), 1);
+        Thesaurus full = FerryLogCorpus.thesaurus(300, 5);
         Thesaurus lists = full.listsOnly(5);
         CoordinationCounts counts = new CoordinationCountsBuilder(1).build();
         EnumSet<CoordinationFeatureFamily> all = EnumSet.allOf(CoordinationFeatureFamily.class);

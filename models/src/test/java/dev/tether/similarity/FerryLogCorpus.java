@@ -17,6 +17,11 @@ public final class FerryLogCorpus {
     private FerryLogCorpus() {
     }
 
+    /** A thesaurus of {@code sentences} sentences (seed 21), frequency floor 3, {@code neighbours} neighbours per word. */
+    public static Thesaurus thesaurus(int sentences, int neighbours) {
+        return ThesaurusBuilder.build(count(sentences, 21), ThesaurusSettings.DEFAULT.withMinFrequency(3).withNeighbours(neighbours), 1);
+    }
+
     /** Feeds {@code sentences} sentences to {@code counter}. */
     public static ContextCounter count(int sentences, long seed) {
         ContextCounter counter = new ContextCounter();
