@@ -1,6 +1,7 @@
 package dev.tether.preprocessing;
 
 import opennlp.tools.ml.model.MaxentModel;
+import opennlp.tools.postag.DefaultPOSSequenceValidator;
 import opennlp.tools.postag.POSContextGenerator;
 import opennlp.tools.postag.POSModel;
 import opennlp.tools.postag.POSTaggerME;
@@ -18,6 +19,10 @@ import java.util.PriorityQueue;
  *       hypotheses often get identical contexts (OpenNLP's cached feature generator returns the features it made for
  *       the first hypothesis at that position, previous-tag features included), and evaluation is a pure function
  *       of the context, so the result is the same;</li>
+ *   <li>with OpenNLP's default feature set (every tagger Tether trains), that one context is not built as strings:
+ *       {@link FeatureFamilyIndex} sums it from each word's features, looked up once per sentence, to the same
+ *       probabilities. With the default set every hypothesis at a position gets the first one's context, as above,
+ *       so the position is scored once, with the tags of the best hypothesis;</li>
  *   <li>a hypothesis is a link to its parent, not a copied list of tags and probabilities;</li>
  *   <li>the cut-off (the beam-th best score of an expansion) is selected, not found by sorting every score.</li>
  * </ul>
@@ -40,6 +45,15 @@ public final class MemoizedBeamTagger {
     private final String[][] evaluated;
     private final double[][] evaluatedScores;
     private final double[] best;
+    /** The natural logarithms of the scores at or above the cut-off of the scores being expanded; NaN for the others. */
+    private final double[] logs;
+    /** Scores positions from the model's parameters by feature family, when its features are OpenNLP's default set; else null. */
+    private final FeatureFamilyIndex.Scorer families;
+    /**
+     * Whether the sequence validator is OpenNLP's default one, which reads only the word and the proposed tag: then
+     * the scored path hands it no tag history, instead of one built per hypothesis and position.
+     */
+    private final boolean validatorReadsNoTags;
 
     /** Whether {@code pos} can be decoded here: its tagging model is a maximum entropy model (every one Tether trains or ships). */
     public static boolean decodes(POSModel pos) {
@@ -64,9 +78,12 @@ public final class MemoizedBeamTagger {
         this.evaluated = new String[beam][];
         this.evaluatedScores = new double[beam][outcomes.length];
         this.best = new double[beam];
+        this.logs = new double[outcomes.length];
+        this.families = FeatureFamilyIndex.of(pos).map(FeatureFamilyIndex::scorer).orElse(null);
+        this.validatorReadsNoTags = validator.getClass() == DefaultPOSSequenceValidator.class;
     }
 
-    /** One hypothesis: its last tag, its probability and score, and the hypothesis it extends. */
+    /** One hypothesis: its last tag, its score (the sum of its tags' log probabilities), and the hypothesis it extends. */
     private static final class Hypothesis implements Comparable<Hypothesis> {
         final Hypothesis parent;
         final String tag;
@@ -80,10 +97,10 @@ public final class MemoizedBeamTagger {
             this.length = 0;
         }
 
-        Hypothesis(Hypothesis parent, String tag, double probability) {
+        Hypothesis(Hypothesis parent, String tag, double logProbability) {
             this.parent = parent;
             this.tag = tag;
-            this.score = parent.score + StrictMath.log(probability);
+            this.score = parent.score + logProbability;
             this.length = parent.length + 1;
         }
 
@@ -104,38 +121,59 @@ public final class MemoizedBeamTagger {
         }
     }
 
+    private static final String[] NO_TAGS = new String[0];
+
+    /** The tags of {@code top}, or none where nothing will read them. */
+    private String[] tagsBefore(Hypothesis top) {
+        return families != null && validatorReadsNoTags ? NO_TAGS : top.tags();
+    }
+
     /** The Penn Treebank tags of {@code words}, one per word. */
     public String[] tag(String[] words) {
         PriorityQueue<Hypothesis> previous = new PriorityQueue<>(beam);
         PriorityQueue<Hypothesis> next = new PriorityQueue<>(beam);
         previous.add(new Hypothesis());
+        if (families != null) families.start(words);
         for (int i = 0; i < words.length; i++) {
             int expand = Math.min(beam, previous.size());
             int seen = 0;
+            double cutOff = 0;
             for (int h = 0; !previous.isEmpty() && h < expand; h++) {
                 Hypothesis top = previous.remove();
-                String[] tags = top.tags();
-                String[] context = contexts.getContext(i, words, tags, NO_ADDITIONAL_CONTEXT);
+                String[] tags = tagsBefore(top);
                 double[] scores = null;
-                for (int k = 0; k < seen; k++) {
-                    if (Arrays.equals(evaluated[k], context)) {
-                        scores = evaluatedScores[k];
-                        break;
+                if (families != null) {
+                    // Every hypothesis at this position has the first one's context (see the class comment).
+                    if (h == 0) families.score(i, top.tag, top.parent == null ? null : top.parent.tag, evaluatedScores[0]);
+                    scores = evaluatedScores[0];
+                } else {
+                    String[] context = contexts.getContext(i, words, tags, NO_ADDITIONAL_CONTEXT);
+                    for (int k = 0; k < seen; k++) {
+                        if (Arrays.equals(evaluated[k], context)) {
+                            scores = evaluatedScores[k];
+                            break;
+                        }
+                    }
+                    if (scores == null) {
+                        double[] fresh = model.eval(context, buffer);
+                        System.arraycopy(fresh, 0, evaluatedScores[seen], 0, fresh.length);
+                        evaluated[seen] = context;
+                        scores = evaluatedScores[seen++];
                     }
                 }
-                if (scores == null) {
-                    double[] fresh = model.eval(context, buffer);
-                    System.arraycopy(fresh, 0, evaluatedScores[seen], 0, fresh.length);
-                    evaluated[seen] = context;
-                    scores = evaluatedScores[seen++];
+                if (families == null || h == 0) {
+                    cutOff = beamthBest(scores);
+                    // The logarithms of the scores that pass, once per set of scores.
+                    for (int p = 0; p < scores.length; p++) logs[p] = scores[p] >= cutOff ? StrictMath.log(scores[p]) : Double.NaN;
                 }
-                double cutOff = beamthBest(scores);
                 for (int p = 0; p < scores.length; p++) {
-                    if (scores[p] >= cutOff) extend(next, top, tags, i, words, p, scores[p]);
+                    if (scores[p] >= cutOff) extend(next, top, tags, i, words, p, logs[p]);
                 }
                 if (next.isEmpty()) {
                     // Nothing of the best scores is a valid continuation: try every valid one.
-                    for (int p = 0; p < scores.length; p++) extend(next, top, tags, i, words, p, scores[p]);
+                    for (int p = 0; p < scores.length; p++) {
+                        extend(next, top, tags, i, words, p, Double.isNaN(logs[p]) ? StrictMath.log(scores[p]) : logs[p]);
+                    }
                 }
             }
             Arrays.fill(evaluated, 0, seen, null);
@@ -150,10 +188,10 @@ public final class MemoizedBeamTagger {
         return previous.remove().tags();
     }
 
-    private void extend(PriorityQueue<Hypothesis> next, Hypothesis top, String[] tags, int i, String[] words, int p, double probability) {
+    private void extend(PriorityQueue<Hypothesis> next, Hypothesis top, String[] tags, int i, String[] words, int p, double logProbability) {
         String tag = outcomes[p];
         if (!validator.validSequence(i, words, tags, tag)) return;
-        Hypothesis extended = new Hypothesis(top, tag, probability);
+        Hypothesis extended = new Hypothesis(top, tag, logProbability);
         if (extended.score > MIN_SEQUENCE_SCORE) next.add(extended);
     }
 
