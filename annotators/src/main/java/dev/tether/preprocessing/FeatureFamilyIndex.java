@@ -12,8 +12,12 @@ import opennlp.tools.util.featuregen.FeatureGeneratorUtil;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.lang.ref.WeakReference;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.Iterator;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
@@ -93,9 +97,33 @@ public final class FeatureFamilyIndex {
     /**
      * The index of {@code pos}, or empty when its contexts are not OpenNLP's default feature set over a maximum
      * entropy model (a model with its own feature descriptor, or one of the OpenNLP 1.5 generation, which has another
-     * context generator): those are tagged through OpenNLP's own context generator.
+     * context generator): those are tagged through OpenNLP's own context generator. Built once per loaded model and
+     * shared (a tagger is made per engine instance, and building takes about 15 ms).
      */
     public static Optional<FeatureFamilyIndex> of(POSModel pos) {
+        synchronized (BUILT) {
+            Optional<FeatureFamilyIndex> index = null;
+            for (Iterator<Built> it = BUILT.iterator(); it.hasNext(); ) {
+                Built b = it.next();
+                POSModel model = b.model.get();
+                if (model == null) it.remove();
+                else if (model == pos) index = b.index;
+            }
+            if (index == null) {
+                index = build(pos);
+                BUILT.add(new Built(new WeakReference<>(pos), index));
+            }
+            return index;
+        }
+    }
+
+    /** An index built for a model, held as long as the model is (OpenNLP's models compare by content, not identity). */
+    private record Built(WeakReference<POSModel> model, Optional<FeatureFamilyIndex> index) {
+    }
+
+    private static final List<Built> BUILT = new ArrayList<>();
+
+    private static Optional<FeatureFamilyIndex> build(POSModel pos) {
         if (!(pos.getArtifact("pos.model") instanceof GISModel model)) return Optional.empty();
         if (!(pos.getFactory().getPOSContextGenerator(1) instanceof ConfigurablePOSContextGenerator)) return Optional.empty();
         Object descriptor = pos.getArtifact(DESCRIPTOR_ARTIFACT);

@@ -35,6 +35,7 @@ public final class MemoizedBeamTagger {
     private static final double MIN_SEQUENCE_SCORE = -100000;
     private static final Object[] NO_ADDITIONAL_CONTEXT = new Object[0];
 
+    /** OpenNLP's context generator, when the model's features are not {@link FeatureFamilyIndex}'s; else null. */
     private final POSContextGenerator contexts;
     private final SequenceValidator<String> validator;
     private final MaxentModel model;
@@ -69,7 +70,6 @@ public final class MemoizedBeamTagger {
         }
         String size = pos.getManifestProperty("BeamSize");
         this.beam = size == null ? POSTaggerME.DEFAULT_BEAM_SIZE : Integer.parseInt(size);
-        this.contexts = pos.getFactory().getPOSContextGenerator(beam);
         this.validator = pos.getFactory().getSequenceValidator();
         this.model = maxent;
         this.outcomes = new String[maxent.getNumOutcomes()];
@@ -80,6 +80,8 @@ public final class MemoizedBeamTagger {
         this.best = new double[beam];
         this.logs = new double[outcomes.length];
         this.families = FeatureFamilyIndex.of(pos).map(FeatureFamilyIndex::scorer).orElse(null);
+        // Building OpenNLP's generator parses its feature descriptor: only when it is used.
+        this.contexts = families == null ? pos.getFactory().getPOSContextGenerator(beam) : null;
         this.validatorReadsNoTags = validator.getClass() == DefaultPOSSequenceValidator.class;
     }
 
