@@ -1,5 +1,6 @@
 package dev.tether.preprocessing;
 
+import dev.tether.io.Sha256;
 import opennlp.tools.ml.ArrayMath;
 import opennlp.tools.ml.maxent.GISModel;
 import opennlp.tools.ml.model.Context;
@@ -45,6 +46,11 @@ public final class FeatureFamilyIndex {
     /** Where OpenNLP keeps a part-of-speech model's feature descriptor, when the model carries one. */
     private static final String DESCRIPTOR_ARTIFACT = "generator.featuregen";
     private static final String DEFAULT_DESCRIPTOR = "/opennlp/tools/postag/pos-default-features.xml";
+    /**
+     * SHA-256 of the feature descriptor this index implements: OpenNLP 2.5.8's {@code pos-default-features.xml}. A
+     * model with another descriptor (its own, or a later OpenNLP's default) is tagged through OpenNLP's generator.
+     */
+    private static final String DESCRIPTOR_SHA256 = "d6737d09cec55717e2e10e70be03c5a15a1708d1b35b3017390862e784c40c3a";
     /** OpenNLP's default prefix and suffix length. */
     private static final int AFFIX = 4;
     /** The window families, in the order OpenNLP's window generator lists them: the word, then before, then after. */
@@ -96,8 +102,8 @@ public final class FeatureFamilyIndex {
 
     /**
      * The index of {@code pos}, or empty when its contexts are not OpenNLP's default feature set over a maximum
-     * entropy model (a model with its own feature descriptor, or one of the OpenNLP 1.5 generation, which has another
-     * context generator): those are tagged through OpenNLP's own context generator. Built once per loaded model and
+     * entropy model (a model with another feature descriptor than {@link #DESCRIPTOR_SHA256}'s, or one of the OpenNLP
+     * 1.5 generation, which has another context generator): those are tagged through OpenNLP's own generator. Built once per loaded model and
      * shared (a tagger is made per engine instance, and building takes about 15 ms).
      */
     public static Optional<FeatureFamilyIndex> of(POSModel pos) {
@@ -127,9 +133,8 @@ public final class FeatureFamilyIndex {
         if (!(pos.getArtifact("pos.model") instanceof GISModel model)) return Optional.empty();
         if (!(pos.getFactory().getPOSContextGenerator(1) instanceof ConfigurablePOSContextGenerator)) return Optional.empty();
         Object descriptor = pos.getArtifact(DESCRIPTOR_ARTIFACT);
-        if (descriptor != null && !(descriptor instanceof byte[] bytes && Arrays.equals(bytes, defaultDescriptor()))) {
-            return Optional.empty();
-        }
+        byte[] bytes = descriptor == null ? defaultDescriptor() : descriptor instanceof byte[] b ? b : null;
+        if (bytes == null || !DESCRIPTOR_SHA256.equals(Sha256.hex(bytes))) return Optional.empty();
         return Optional.of(new FeatureFamilyIndex(model));
     }
 
