@@ -15,7 +15,8 @@ import java.util.Map;
  * gain of two threads over one. Tokens are
  * counted as {@link ResolutionThroughput} counts them. JMH options are passed through.
  *
- * <p>{@code interleaved ROUNDS} instead runs the four variants in turn, ROUNDS times (after {@value #WARM_UP_ROUNDS} warm-up rounds: the JIT needs a few runs of each variant), and
+ * <p>{@code interleaved ROUNDS [WARM-UP]} instead runs the four variants in turn, ROUNDS times (after WARM-UP rounds,
+ * {@value #WARM_UP_ROUNDS} unless given: the JIT needs a few runs of each variant), and
  * prints the median time of each and the median of the per-round ratios. JMH measures one variant after the other,
  * minutes apart; on a machine shared with other work the load changes in between, and interleaving keeps the
  * variants of one round under the same load.
@@ -29,7 +30,7 @@ public final class CollectionThroughputMain {
 
     public static void main(String[] args) throws Exception {
         if (args.length >= 1 && args[0].equals("interleaved")) {
-            interleaved(args.length > 1 ? Integer.parseInt(args[1]) : 5);
+            interleaved(args.length > 1 ? Integer.parseInt(args[1]) : 5, args.length > 2 ? Integer.parseInt(args[2]) : WARM_UP_ROUNDS);
             return;
         }
         CommandLineOptions cli = new CommandLineOptions(args);
@@ -44,7 +45,7 @@ public final class CollectionThroughputMain {
                 previous / one, chunked / one, one / two);
     }
 
-    private static void interleaved(int rounds) throws Exception {
+    private static void interleaved(int rounds, int warmUpRounds) throws Exception {
         CollectionThroughput b = new CollectionThroughput();
         b.conllu = "";
         b.setUp();
@@ -54,7 +55,7 @@ public final class CollectionThroughputMain {
         com.sun.management.OperatingSystemMXBean os =
                 (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         try {
-            for (int round = -WARM_UP_ROUNDS; round < rounds; round++) {
+            for (int round = -warmUpRounds; round < rounds; round++) {
                 for (int k = 0; k < variants; k++) {
                     int variant = (k + Math.max(round, 0)) % variants; // rotate the order from round to round
                     long start = System.nanoTime();

@@ -1,5 +1,6 @@
 package dev.tether.output;
 
+import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
@@ -37,7 +38,8 @@ final class XmlTextWriter implements ContentHandler {
     private boolean open;
 
     XmlTextWriter(OutputStream stream, boolean xml11) {
-        this.out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
+        // Buffered in front of the encoder: the encoder wraps every write it is handed in a buffer object of its own.
+        this.out = new BufferedWriter(new OutputStreamWriter(stream, StandardCharsets.UTF_8), 1 << 14);
         this.xml11 = xml11;
     }
 
