@@ -1,6 +1,7 @@
 package dev.tether.attachment;
 
 import dev.tether.candidates.HeadClass;
+import dev.tether.counts.AmbiguousStructures;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.HeadChoiceCountsBuilder;
 import dev.tether.counts.QuadrupleCounts;
@@ -19,7 +20,10 @@ import dev.tether.vocabulary.Vocabulary;
  * quadruple would only return the configuration's own previous split), and gives the noun its probability of the
  * configuration's count and the verb the rest; with no evidence at any level the count is split evenly (Hindle &amp;
  * Rooth 1993). Round 0 adds no ambiguous case. The split also adds hits (not trials: the candidates were already
- * counted as trials) to the verb's and the noun's head-choice keys. Deterministic: prepositions and configurations
+ * counted as trials) to the verb's and the noun's head-choice keys, lexical and structural (the structural ones with
+ * the split of the whole preposition, see {@link AmbiguousStructures}): without the structural share, a verb with a
+ * noun between it and the preposition is never the head in raw counts, and a model from raw text alone chose the verb
+ * for 49% of the gold verb attachments of EWT dev end to end (66% with it). Deterministic: prepositions and configurations
  * are visited in id order, which is sorted order.
  */
 public final class AmbiguousReestimation {
@@ -44,7 +48,7 @@ public final class AmbiguousReestimation {
             current = withSplit(raw.events(), ambiguous, split);
         }
         if (split == null) return new Estimate(raw.events(), raw.cooccurrence());
-        return new Estimate(current, headChoiceWithSplit(raw.cooccurrence(), ambiguous, split));
+        return new Estimate(current, headChoiceWithSplit(raw.cooccurrence(), ambiguous, raw.ambiguousStructures(), split));
     }
 
     /** Per preposition id of {@code ambiguous}, per configuration index of its whole-quadruple table: P(noun). */
@@ -114,7 +118,8 @@ public final class AmbiguousReestimation {
         return b.buildSorted();
     }
 
-    private static HeadChoiceCounts headChoiceWithSplit(HeadChoiceCounts cooccurrence, QuadrupleCounts ambiguous, double[][] split) {
+    private static HeadChoiceCounts headChoiceWithSplit(HeadChoiceCounts cooccurrence, QuadrupleCounts ambiguous,
+                                                        AmbiguousStructures structures, double[][] split) {
         HeadChoiceCountsBuilder b = new HeadChoiceCountsBuilder();
         b.addAll(cooccurrence);
         Vocabulary aw = ambiguous.words();
@@ -129,6 +134,34 @@ public final class AmbiguousReestimation {
                 b.addLexical(prep, aw.word(TupleKey.part(key, 3, 1)), HeadClass.NOUN.ordinal(), n2, c * split[q][i], 0.0);
             }
         }
+        addStructureHits(b, ambiguous, structures, split);
         return b.buildSorted();
+    }
+
+    /**
+     * The structural share of the split: each ambiguous configuration's verb and noun structure get the verb's and
+     * the noun's share of its preposition's split (the counts keep structures per preposition, not per configuration),
+     * as hits only (the candidates were already counted as trials).
+     */
+    private static void addStructureHits(HeadChoiceCountsBuilder b, QuadrupleCounts ambiguous, AmbiguousStructures structures,
+                                         double[][] split) {
+        for (int s = 0; s < structures.size(); s++) {
+            int q = ambiguous.prepositions().id(structures.preposition(s));
+            if (q <= 0 || q >= split.length) continue;
+            TupleCounts configurations = ambiguous.table(q, SubTuple.VERB_NOUN1_NOUN2);
+            double all = 0, noun = 0;
+            for (int i = 0; i < split[q].length; i++) {
+                all += configurations.trialsAt(i);
+                noun += configurations.trialsAt(i) * split[q][i];
+            }
+            if (all == 0) continue;
+            double nounShare = noun / all;
+            TupleCounts pairs = structures.pairs(s);
+            for (int i = 0; i < pairs.size(); i++) {
+                double c = pairs.trialsAt(i);
+                b.addStructureHits(AmbiguousStructures.verbStructure(pairs.key(i)), c * (1 - nounShare));
+                b.addStructureHits(AmbiguousStructures.nounStructure(pairs.key(i)), c * nounShare);
+            }
+        }
     }
 }

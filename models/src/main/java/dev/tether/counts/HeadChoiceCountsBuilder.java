@@ -51,6 +51,11 @@ public final class HeadChoiceCountsBuilder {
         structure.add(structureKey, hit ? weight : 0, weight);
     }
 
+    /** Adds {@code hits} (no trials) to a structural key: a share of a case already counted as a trial. */
+    public void addStructureHits(long structureKey, double hits) {
+        structure.add(structureKey, hits, 0);
+    }
+
     /** Adds all counts of {@code other}. */
     public void addAll(HeadChoiceCounts other) {
         addAll(other, 1.0);

@@ -30,7 +30,9 @@ import java.util.zip.InflaterInputStream;
  *       unambiguous attachment also a hit (so the structural rates lean to what the unambiguous rule picks: the
  *       nearest verb, or a nearest noun with no verb near).</li>
  *   <li>{@link #ambiguous()}: the ambiguous verb–noun–preposition–noun configurations, counted as trials only (no
- *       outcome), for re-estimation ({@code dev.tether.attachment.AmbiguousReestimation}).</li>
+ *       outcome), for re-estimation ({@code dev.tether.attachment.AmbiguousReestimation}), and
+ *       {@link #ambiguousStructures()}: the structures of their verb and noun candidates, per preposition, so that
+ *       re-estimation gives the structural rates their share too (added in format version 3).</li>
  *   <li>{@link #words()}: how often each noun and verb of the text occurred, keyed as the count tables key them,
  *       for the domain report's vocabulary overlap with a base model.</li>
  * </ul>
@@ -39,7 +41,7 @@ import java.util.zip.InflaterInputStream;
  */
 public final class RawAttachmentCounts {
     /** Layout version of the counts file; change it whenever the layout below changes. */
-    public static final int FORMAT_VERSION = 2;
+    public static final int FORMAT_VERSION = 3;
     private static final ChecksummedFile.Kind KIND = new ChecksummedFile.Kind("TETHER-RAW-COUNTS\n", "raw counts",
             "a counts file written by Tether's unlabelled attachment counter", "count the text again",
             "Count the text again with this version.");
@@ -47,6 +49,7 @@ public final class RawAttachmentCounts {
     private final QuadrupleCounts events;
     private final HeadChoiceCounts cooccurrence;
     private final QuadrupleCounts ambiguous;
+    private final AmbiguousStructures ambiguousStructures;
     private final WordFrequencies words;
     private final Tally tally;
 
@@ -66,10 +69,11 @@ public final class RawAttachmentCounts {
     }
 
     RawAttachmentCounts(QuadrupleCounts events, HeadChoiceCounts cooccurrence, QuadrupleCounts ambiguous,
-                        WordFrequencies words, Tally tally) {
+                        AmbiguousStructures ambiguousStructures, WordFrequencies words, Tally tally) {
         this.events = events;
         this.cooccurrence = cooccurrence;
         this.ambiguous = ambiguous;
+        this.ambiguousStructures = ambiguousStructures;
         this.words = words;
         this.tally = tally;
     }
@@ -77,6 +81,7 @@ public final class RawAttachmentCounts {
     public QuadrupleCounts events() { return events; }
     public HeadChoiceCounts cooccurrence() { return cooccurrence; }
     public QuadrupleCounts ambiguous() { return ambiguous; }
+    public AmbiguousStructures ambiguousStructures() { return ambiguousStructures; }
     /** Occurrences of the text's nouns and verbs (tokens tagged NN* or VB*), by normalized form. */
     public WordFrequencies words() { return words; }
     public Tally tally() { return tally; }
@@ -97,6 +102,7 @@ public final class RawAttachmentCounts {
             events.write(out);
             cooccurrence.write(out);
             ambiguous.write(out);
+            ambiguousStructures.write(out);
             words.write(out);
         } catch (IOException e) {
             throw new java.io.UncheckedIOException("writing to memory cannot fail", e);
@@ -130,7 +136,7 @@ public final class RawAttachmentCounts {
             Tally t = new Tally(in.readLong(), in.readLong(), in.readLong(), in.readLong(), in.readLong(), in.readLong(),
                     in.readLong());
             return new RawAttachmentCounts(QuadrupleCounts.read(in), HeadChoiceCounts.read(in), QuadrupleCounts.read(in),
-                    WordFrequencies.read(in), t);
+                    AmbiguousStructures.read(in), WordFrequencies.read(in), t);
         } catch (RawCountsFormatException e) {
             throw e;
         } catch (IOException | RuntimeException e) {

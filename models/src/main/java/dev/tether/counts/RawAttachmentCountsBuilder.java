@@ -18,6 +18,7 @@ public final class RawAttachmentCountsBuilder {
     private QuadrupleCountsBuilder events = new QuadrupleCountsBuilder();
     private HeadChoiceCountsBuilder cooccurrence = new HeadChoiceCountsBuilder();
     private QuadrupleCountsBuilder ambiguous = new QuadrupleCountsBuilder();
+    private AmbiguousStructures.Builder ambiguousStructures = new AmbiguousStructures.Builder();
     private WordFrequencies.Builder words = new WordFrequencies.Builder();
     // Noun and verb tokens by surface form: normalized once per distinct form, in build(), not once per token.
     private WordFrequencies.Builder nounForms = new WordFrequencies.Builder();
@@ -52,6 +53,7 @@ public final class RawAttachmentCountsBuilder {
             ambiguousQuadruples++;
             ambiguous.add(normalizer.verb(q.head(q.quadrupleVerb())), normalizer.noun(q.head(q.quadrupleNoun())), p, o,
                     AttachmentSite.VERB, 1.0);
+            ambiguousStructures.add(p, structure[q.quadrupleVerb()], structure[q.quadrupleNoun()]);
         }
     }
 
@@ -104,6 +106,7 @@ public final class RawAttachmentCountsBuilder {
         events.addAll(other.events());
         cooccurrence.addAll(other.cooccurrence());
         ambiguous.addAll(other.ambiguous());
+        ambiguousStructures.addAll(other.ambiguousStructures());
         words.addAll(other.words());
         tally = tally.plus(other.tally());
     }
@@ -111,8 +114,8 @@ public final class RawAttachmentCountsBuilder {
     /** The counts so far, words numbered in sorted order. */
     public RawAttachmentCounts build() {
         WordFrequencies all = allWords();
-        return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(), all,
-                wholeTally());
+        return new RawAttachmentCounts(events.buildSorted(), cooccurrence.buildSorted(), ambiguous.buildSorted(),
+                ambiguousStructures.build(), all, wholeTally());
     }
 
     /**
@@ -131,12 +134,14 @@ public final class RawAttachmentCountsBuilder {
         cooccurrence = new HeadChoiceCountsBuilder();
         QuadrupleCounts builtAmbiguous = ambiguous.buildSorted();
         ambiguous = new QuadrupleCountsBuilder();
+        AmbiguousStructures builtStructures = ambiguousStructures.build();
+        ambiguousStructures = new AmbiguousStructures.Builder();
         RawAttachmentCounts.Tally whole = wholeTally();
         tally = RawAttachmentCounts.Tally.ZERO;
         prepositions = 0;
         unambiguous = 0;
         ambiguousQuadruples = 0;
-        return new RawAttachmentCounts(builtEvents, builtCooccurrence, builtAmbiguous, all, whole);
+        return new RawAttachmentCounts(builtEvents, builtCooccurrence, builtAmbiguous, builtStructures, all, whole);
     }
 
     private WordFrequencies allWords() {
