@@ -1,5 +1,6 @@
 package dev.tether.cli;
 
+import dev.tether.counts.RawAttachmentCounts;
 import dev.tether.model.ModelFile;
 import dev.tether.model.ModelSource;
 import dev.tether.model.TetherModel;
@@ -118,7 +119,8 @@ class TrainRawInputTest {
         Path oldCounts = withVersion(counts, "TETHER-RAW-COUNTS\n", 1, "old.counts");
         CommandLineRun merge = CommandLineRun.of("train", "--raw-counts", oldCounts.toString(), "--out", dir.resolve("y.tether").toString());
         assertEquals(Tether.INPUT, merge.exitCode(), merge::toString);
-        assertTrue(merge.err().contains(oldCounts + " has raw counts format version 1; this build of Tether reads version 2."), merge::toString);
+        assertTrue(merge.err().contains(oldCounts + " has raw counts format version 1; this build of Tether reads version "
+                + RawAttachmentCounts.FORMAT_VERSION + "."), merge::toString);
 
         // A thesaurus file's frame with another version: refused before anything else is read.
         ByteArrayOutputStream frame = new ByteArrayOutputStream();
