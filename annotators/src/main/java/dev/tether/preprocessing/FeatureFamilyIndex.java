@@ -32,10 +32,9 @@ import java.util.Optional;
  * {@code w[i]} lower-cased, and the same prefixed {@code p1}, {@code p2}, {@code n1}, {@code n2} for the words one and
  * two before and after; {@code S=begin} (and {@code p1S=begin}, {@code p2S=begin}) when {@code i} (or the word one,
  * two before) is the first; {@code wc=} the word's class and {@code w&c=} word and class; {@code t=} the previous tag
- * and {@code t2=} the two previous tags. Here each word is lower-cased (as {@link StringUtil#toLowerCase} does) and
- * classed (with OpenNLP's own {@link FeatureGeneratorUtil#tokenFeature}) once per sentence, and looked up once per
- * family; a
- * position then adds the parameters of its features in the order OpenNLP lists them, with the model's uniform prior
+ * and {@code t2=} the two previous tags. Here a word is lower-cased (as {@link StringUtil#toLowerCase} does), classed
+ * (with OpenNLP's own {@link FeatureGeneratorUtil#tokenFeature}) and looked up in each family when a {@link Scorer}
+ * first meets it; a position then adds the parameters of its features in the order OpenNLP lists them, with the model's uniform prior
  * and the same exponentiation and normalisation as {@link GISModel#eval}, so the scores are the same doubles.
  * {@code FeatureFamilyIndexEwtTest} (test-corpora) compares them with {@link GISModel#eval} over OpenNLP's own
  * contexts at every position of UD English EWT sentences.
