@@ -34,8 +34,8 @@ import java.util.Optional;
  * two before) is the first; {@code wc=} the word's class and {@code w&c=} word and class; {@code t=} the previous tag
  * and {@code t2=} the two previous tags. Here a word is lower-cased (as {@link StringUtil#toLowerCase} does), classed
  * (with OpenNLP's own {@link FeatureGeneratorUtil#tokenFeature}) and looked up in each family when a {@link Scorer}
- * first meets it; a position then adds the parameters of its features in the order OpenNLP lists them, with the model's uniform prior
- * and the same exponentiation and normalisation as {@link GISModel#eval}, so the scores are the same doubles.
+ * first meets it; a position then adds the parameters of its features in the order OpenNLP lists them, with the
+ * model's uniform prior and the same exponentiation and normalisation as {@link GISModel#eval}, so the scores are the same doubles.
  * {@code FeatureFamilyIndexEwtTest} (test-corpora) compares them with {@link GISModel#eval} over OpenNLP's own
  * contexts at every position of UD English EWT sentences.
  *
