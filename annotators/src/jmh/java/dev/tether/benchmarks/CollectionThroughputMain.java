@@ -17,8 +17,9 @@ import java.util.Map;
  *
  * <p>{@code interleaved ROUNDS [WARM-UP]} instead runs the four variants in turn, ROUNDS times (after WARM-UP rounds,
  * {@value #WARM_UP_ROUNDS} unless given: the JIT needs a few runs of each variant), and
- * prints the median time of each and the median of the per-round ratios. JMH measures one variant after the other,
- * minutes apart; on a machine shared with other work the load changes in between, and interleaving keeps the
+ * prints the median time of each and the median of the per-round ratios, then what two threads give on this machine
+ * for work that shares nothing ({@link MachineScaling}), the ceiling to read the two-thread ratio against. JMH
+ * measures one variant after the other, minutes apart; on a machine shared with other work the load changes in between, and interleaving keeps the
  * variants of one round under the same load.
  */
 public final class CollectionThroughputMain {
@@ -101,9 +102,10 @@ public final class CollectionThroughputMain {
         System.out.printf("CPU work, previous vs default: %.2fx%n", median(cpu[0]) / median(cpu[2]));
         System.out.printf("CPU work, chunked vs default:  %.2fx%n", median(cpu[1]) / median(cpu[2]));
         System.out.printf("CPU work, 2 threads vs 1:      %.2fx%n", median(cpu[3]) / median(cpu[2]));
+        MachineScaling.report(5);
     }
 
-    private static double median(double[] values) {
+    static double median(double[] values) {
         double[] v = values.clone();
         Arrays.sort(v);
         return v.length % 2 == 1 ? v[v.length / 2] : (v[v.length / 2 - 1] + v[v.length / 2]) / 2;
