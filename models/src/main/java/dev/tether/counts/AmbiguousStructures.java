@@ -24,10 +24,6 @@ public final class AmbiguousStructures {
         this.pairs = pairs;
     }
 
-    public static AmbiguousStructures empty() {
-        return new AmbiguousStructures(new String[0], new TupleCounts[0]);
-    }
-
     /** Number of prepositions with ambiguous configurations. */
     public int size() {
         return prepositions.length;
