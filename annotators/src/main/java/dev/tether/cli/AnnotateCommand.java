@@ -51,7 +51,7 @@ final class AnnotateCommand implements Command {
 
     @Override
     public String usage() {
-        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N | --spark MASTER] [--chunks] [--fresh] [--report]";
+        return "annotate --in FILE|FOLDER --out FOLDER [--model MODEL|default] [--threads N | --spark MASTER] [--chunks] [--line-sentences] [--fresh] [--report]";
     }
 
     @Override
@@ -70,6 +70,9 @@ final class AnnotateCommand implements Command {
                 + "  --spark MASTER     run on Apache Spark: local[N] (embedded, N pipelines), spark://host:port, yarn,\n"
                 + "                     k8s://...; the output is byte for byte that of a run on threads\n"
                 + "  --chunks           also write base chunks into the XMI (slower; Tether does not need them)\n"
+                + "  --line-sentences   every line break ends a sentence, for text written one entry per line\n"
+                + "                     (logs, lists, notes); by default a line break is a space and the\n"
+                + "                     sentence detector decides, which suits prose wrapped at a fixed width\n"
                 + "  --fresh            start over: forget what an earlier run into --out completed\n"
                 + "  --report           also write the HTML audit report into --out/" + REPORT + "/ (see 'tether audit')\n\n"
                 + "Re-running the same command into the same folder finishes an interrupted run: documents whose\n"
@@ -82,7 +85,7 @@ final class AnnotateCommand implements Command {
     @Override
     public int run(String[] args, PrintStream out, PrintStream err) throws UsageException, IOException {
         CommandArguments a = new CommandArguments(name(), args, 1, Set.of("in", "out", "model", "threads", "spark"),
-                Set.of("chunks", "fresh", "report"));
+                Set.of("chunks", "line-sentences", "fresh", "report"));
         SparkMaster spark = SparkOption.master(a.value("spark", null));
         if (spark != null && a.has("threads")) {
             throw new UsageException("--threads and --spark exclude each other: on Spark the master sets how many"
@@ -93,6 +96,7 @@ final class AnnotateCommand implements Command {
         String model = a.value("model", ModelLocator.DEFAULT);
         int threads = a.integer("threads", 1, Runtime.getRuntime().availableProcessors());
         boolean chunks = a.has("chunks");
+        boolean lineSentences = a.has("line-sentences");
         if (Files.exists(outDir) && !Files.isDirectory(outDir)) {
             throw new IOException(outDir + " exists and is not a folder; give a folder for --out");
         }
@@ -106,7 +110,7 @@ final class AnnotateCommand implements Command {
         TetherModel loaded = ModelLocator.load(model); // fails with the model's own message, before any output
         AnalysisEngineDescription pipeline;
         try {
-            pipeline = TetherPipeline.forRawText(model, chunks);
+            pipeline = TetherPipeline.forRawText(model, chunks, lineSentences);
         } catch (ResourceInitializationException e) {
             throw new IOException("cannot build the pipeline: " + CollectionRun.rootMessage(e), e);
         }
@@ -116,7 +120,8 @@ final class AnnotateCommand implements Command {
             OutputFolder.prepare(outDir);
             // An old summary would claim the folder is complete while this run is under way.
             Files.deleteIfExists(outDir.resolve(SUMMARY));
-            settings = new CollectionRun.Settings(model, loaded.id(), chunks, threads, a.has("fresh"), Tether.version());
+            settings = new CollectionRun.Settings(model, loaded.id(), chunks, lineSentences, threads, a.has("fresh"),
+                    Tether.version());
             result = runWithProgress(listing, outDir, settings, err, run -> run.run(pipeline));
         } else {
             SparkLibraries.require();
@@ -124,9 +129,9 @@ final class AnnotateCommand implements Command {
                 job.checkExecutors(List.of(in.toString()), model, loaded.id(), outDir); // before any output, like the checks above
                 OutputFolder.prepare(outDir);
                 Files.deleteIfExists(outDir.resolve(SUMMARY));
-                settings = new CollectionRun.Settings(model, loaded.id(), chunks, job.parallelism(), a.has("fresh"),
-                        Tether.version());
-                CollectionRun.Elsewhere onSpark = job.annotation(model, loaded.id(), chunks, outDir);
+                settings = new CollectionRun.Settings(model, loaded.id(), chunks, lineSentences, job.parallelism(),
+                        a.has("fresh"), Tether.version());
+                CollectionRun.Elsewhere onSpark = job.annotation(model, loaded.id(), chunks, lineSentences, outDir);
                 result = runWithProgress(listing, outDir, settings, err, run -> run.run(onSpark));
             }
         }
@@ -210,6 +215,7 @@ final class AnnotateCommand implements Command {
                 g.writeStringField("byteOrderMark", "not part of the text: offsets start after it");
                 g.writeEndObject();
                 g.writeBooleanField("chunks", settings.chunks());
+                g.writeBooleanField("lineBreaksEndSentences", settings.lineBreaksEndSentences());
                 g.writeNumberField("threads", settings.threads());
                 g.writeNumberField("seconds", Math.round(r.seconds() * 100) / 100.0);
                 g.writeArrayFieldStart("failed");

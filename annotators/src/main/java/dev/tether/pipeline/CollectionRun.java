@@ -44,11 +44,24 @@ public final class CollectionRun {
     public static final String XMI = ".xmi";
     public static final String LEDGER = ".ledger.jsonl";
 
-    /** What shapes the output: the model location and id, the chunk option, Tether's version. */
-    public record Settings(String model, String modelId, boolean chunks, int threads, boolean fresh, String version) {
-        /** The part of the settings that the output depends on, as recorded in the manifest. */
+    /**
+     * What shapes the output: the model location and id, the chunk option, whether line breaks end sentences,
+     * Tether's version.
+     */
+    public record Settings(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences, int threads,
+                           boolean fresh, String version) {
+        /** Settings with line breaks as spaces (the default). */
+        public Settings(String model, String modelId, boolean chunks, int threads, boolean fresh, String version) {
+            this(model, modelId, chunks, false, threads, fresh, version);
+        }
+
+        /**
+         * The part of the settings that the output depends on, as recorded in the manifest (the line-break option only
+         * when on, so that manifests written before it existed still match).
+         */
         public String fingerprint() {
-            return "tether " + version + "; model " + modelId + "; chunks " + chunks;
+            return "tether " + version + "; model " + modelId + "; chunks " + chunks
+                    + (lineBreaksEndSentences ? "; line breaks end sentences" : "");
         }
     }
 

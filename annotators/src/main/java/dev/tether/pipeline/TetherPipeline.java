@@ -39,9 +39,19 @@ public final class TetherPipeline {
 
     /** Raw text in, attachment decisions out; {@code chunks} adds base chunks to the CAS. */
     public static AnalysisEngineDescription forRawText(String model, boolean chunks) throws ResourceInitializationException {
+        return forRawText(model, chunks, false);
+    }
+
+    /**
+     * Raw text in, attachment decisions out; {@code chunks} adds base chunks to the CAS, and with
+     * {@code lineBreaksEndSentences} every line break ends a sentence (see {@link TextPreprocessor#PARAM_LINE_BREAKS_END_SENTENCES}).
+     */
+    public static AnalysisEngineDescription forRawText(String model, boolean chunks, boolean lineBreaksEndSentences)
+            throws ResourceInitializationException {
         return AnalysisEngineFactory.createEngineDescription(
                 AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_MODEL, model,
-                        TextPreprocessor.PARAM_CHUNK, chunks),
+                        TextPreprocessor.PARAM_CHUNK, chunks,
+                        TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, lineBreaksEndSentences),
                 resolution(model));
     }
 

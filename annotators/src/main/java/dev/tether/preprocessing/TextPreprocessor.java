@@ -45,6 +45,12 @@ import opennlp.tools.util.Span;
  * 50,000-word log line) is therefore cut into consecutive windows of at most {@link #PARAM_MAX_SENTENCE_TOKENS}
  * tokens; each window is tagged, chunked and written as its own {@link Sentence}, and a warning is logged. No text
  * is dropped. Empty and blank documents produce no annotations.
+ *
+ * <p><b>Line breaks.</b> By default a line break is white space like any other and OpenNLP's sentence detector
+ * decides where sentences end, so prose wrapped at a fixed width reads as whole sentences; a line without final
+ * punctuation then runs on into the next. Text written one entry per line (a maintenance log, a list of findings, a
+ * clinical note of short lines) wants {@link #PARAM_LINE_BREAKS_END_SENTENCES}: every line break (LF, CRLF, CR, NEL,
+ * U+2028, U+2029) ends a sentence, and the detector still splits each line where it finds sentence punctuation.
  */
 @ResourceMetaData(name = "Tether text preprocessor",
         description = "Sentences, Penn Treebank tagged tokens and chunks from raw English text (OpenNLP).")
@@ -60,6 +66,14 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     public static final String PARAM_MAX_SENTENCE_TOKENS = "maxSentenceTokens";
     @ConfigurationParameter(name = PARAM_MAX_SENTENCE_TOKENS, mandatory = true, defaultValue = "300")
     private int maxSentenceTokens;
+
+    /**
+     * Whether every line break ends a sentence (off by default: line breaks are spaces and the sentence detector
+     * decides). For text written one entry per line, where an entry often lacks final punctuation.
+     */
+    public static final String PARAM_LINE_BREAKS_END_SENTENCES = "lineBreaksEndSentences";
+    @ConfigurationParameter(name = PARAM_LINE_BREAKS_END_SENTENCES, mandatory = true, defaultValue = "false")
+    private boolean lineBreaksEndSentences;
 
     /** Resource bundle of this engine's exception messages (UIMA exceptions take their message from a bundle). */
     private static final String MESSAGES = "dev.tether.preprocessing.PreprocessorMessages";
@@ -158,7 +172,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
         if (text == null || text.isBlank()) {
             return;
         }
-        for (Span sentence : CodePointSpans.align(sentenceDetector.sentPosDetect(text), text)) {
+        for (Span sentence : sentences(text)) {
             String sentenceText = sentence.getCoveredText(text).toString();
             Span[] tokens = CodePointSpans.align(tokenizer.apply(sentenceText), sentenceText);
             if (tokens.length == 0) {
@@ -178,6 +192,30 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
                 annotateWindow(jcas, sentenceText, offset, tokens, start, end);
             }
         }
+    }
+
+    /** The sentences of {@code text}, as the detector finds them in the whole text or in each line. */
+    private Span[] sentences(String text) {
+        if (!lineBreaksEndSentences) return CodePointSpans.align(sentenceDetector.sentPosDetect(text), text);
+        java.util.List<Span> all = new java.util.ArrayList<>();
+        int start = 0;
+        while (start < text.length()) {
+            int end = start;
+            while (end < text.length() && !isLineBreak(text.charAt(end))) end++;
+            if (end > start) {
+                String line = text.substring(start, end);
+                for (Span s : CodePointSpans.align(sentenceDetector.sentPosDetect(line), line)) {
+                    all.add(new Span(start + s.getStart(), start + s.getEnd()));
+                }
+            }
+            start = end + 1; // CRLF: the LF is an empty line of its own, which gives no sentence
+        }
+        return all.toArray(new Span[0]);
+    }
+
+    /** LF, CR, NEL and the Unicode line and paragraph separators. */
+    static boolean isLineBreak(char c) {
+        return c == '\n' || c == '\r' || c == '\u0085' || c == '\u2028' || c == '\u2029';
     }
 
     /** Tags, chunks and writes tokens {@code [start, end)} of one sentence as one {@link Sentence}. */

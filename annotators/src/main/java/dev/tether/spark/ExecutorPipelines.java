@@ -15,10 +15,10 @@ import java.util.concurrent.atomic.AtomicInteger;
 /**
  * The pipelines of one executor process. A task borrows a pipeline for its partition and gives it back, so each task
  * slot builds its pipeline once and later partitions reuse it; every pipeline of the process scores with the one model
- * instance that {@link LoadedModels} keeps per file. Pipelines are kept per model (location and id) and chunk setting.
+ * instance that {@link LoadedModels} keeps per file. Pipelines are kept per model (location and id), chunk setting and line-break setting.
  */
 final class ExecutorPipelines {
-    private record Key(String location, String modelId, boolean chunks) {
+    private record Key(String location, String modelId, boolean chunks, boolean lineBreaksEndSentences) {
     }
 
     private static final Map<Key, Queue<DocumentAnnotator>> IDLE = new ConcurrentHashMap<>();
@@ -28,9 +28,9 @@ final class ExecutorPipelines {
     }
 
     /** An idle pipeline for the model at {@code location} (which must have id {@code modelId}), or a new one. */
-    static DocumentAnnotator borrow(String location, String modelId, boolean chunks)
+    static DocumentAnnotator borrow(String location, String modelId, boolean chunks, boolean lineBreaksEndSentences)
             throws IOException, ResourceInitializationException {
-        Key key = new Key(location, modelId, chunks);
+        Key key = new Key(location, modelId, chunks, lineBreaksEndSentences);
         DocumentAnnotator idle = IDLE.computeIfAbsent(key, k -> new ConcurrentLinkedQueue<>()).poll();
         if (idle != null) return idle;
         String loaded = LoadedModels.get(location).id();
@@ -39,11 +39,12 @@ final class ExecutorPipelines {
                     + modelId + "; give every executor the same model file (spark-submit --files, or one shared path)");
         }
         BUILT.incrementAndGet();
-        return new DocumentAnnotator(TetherPipeline.forRawText(location, chunks));
+        return new DocumentAnnotator(TetherPipeline.forRawText(location, chunks, lineBreaksEndSentences));
     }
 
-    static void giveBack(String location, String modelId, boolean chunks, DocumentAnnotator annotator) {
-        IDLE.computeIfAbsent(new Key(location, modelId, chunks), k -> new ConcurrentLinkedQueue<>()).add(annotator);
+    static void giveBack(String location, String modelId, boolean chunks, boolean lineBreaksEndSentences,
+                         DocumentAnnotator annotator) {
+        IDLE.computeIfAbsent(new Key(location, modelId, chunks, lineBreaksEndSentences), k -> new ConcurrentLinkedQueue<>()).add(annotator);
     }
 
     /** How many pipelines this process has built. */

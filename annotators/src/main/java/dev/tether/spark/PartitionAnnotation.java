@@ -36,14 +36,17 @@ final class PartitionAnnotation implements FlatMapFunction<Iterator<ArrayList<Do
     private final String model;
     private final String modelId;
     private final boolean chunks;
+    private final boolean lineBreaksEndSentences;
     private final String out;
     private final String fingerprint;
     private final BeforeCommit beforeCommit;
 
-    PartitionAnnotation(String model, String modelId, boolean chunks, Path out, String fingerprint, BeforeCommit beforeCommit) {
+    PartitionAnnotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences, Path out,
+                        String fingerprint, BeforeCommit beforeCommit) {
         this.model = model;
         this.modelId = modelId;
         this.chunks = chunks;
+        this.lineBreaksEndSentences = lineBreaksEndSentences;
         this.out = out.toAbsolutePath().toString();
         this.fingerprint = fingerprint;
         this.beforeCommit = beforeCommit;
@@ -60,7 +63,7 @@ final class PartitionAnnotation implements FlatMapFunction<Iterator<ArrayList<Do
         task.addTaskFailureListener(cleanUp);
 
         String location = ExecutorModel.resolve(model);
-        DocumentAnnotator annotator = ExecutorPipelines.borrow(location, modelId, chunks);
+        DocumentAnnotator annotator = ExecutorPipelines.borrow(location, modelId, chunks, lineBreaksEndSentences);
         List<DocumentOutcome> outcomes = new ArrayList<>(tasks.size());
         try {
             for (DocumentTask t : tasks) {
@@ -77,7 +80,7 @@ final class PartitionAnnotation implements FlatMapFunction<Iterator<ArrayList<Do
                 outcomes.add(o);
             }
         } finally {
-            ExecutorPipelines.giveBack(location, modelId, chunks, annotator);
+            ExecutorPipelines.giveBack(location, modelId, chunks, lineBreaksEndSentences, annotator);
         }
         return outcomes.iterator();
     }

@@ -125,15 +125,27 @@ public final class SparkJob implements AutoCloseable {
 
     /** The annotation job for {@link CollectionRun#run(CollectionRun.Elsewhere)}. */
     public CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, Path out) {
-        return annotation(model, modelId, chunks, out, null);
+        return annotation(model, modelId, chunks, false, out, null);
+    }
+
+    /** The annotation job; with {@code lineBreaksEndSentences} every line break ends a sentence. */
+    public CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences,
+                                              Path out) {
+        return annotation(model, modelId, chunks, lineBreaksEndSentences, out, null);
     }
 
     CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, Path out,
                                        PartitionAnnotation.BeforeCommit beforeCommit) {
+        return annotation(model, modelId, chunks, false, out, beforeCommit);
+    }
+
+    private CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences,
+                                               Path out, PartitionAnnotation.BeforeCommit beforeCommit) {
         return (tasks, fingerprint) -> {
             List<ArrayList<DocumentTask>> parts = BalancedPartitions.of(tasks, PARTITIONS_PER_SLOT * parallelism(),
                     t -> new File(t.file()).length());
-            PartitionAnnotation work = new PartitionAnnotation(model, modelId, chunks, out, fingerprint, beforeCommit);
+            PartitionAnnotation work = new PartitionAnnotation(model, modelId, chunks, lineBreaksEndSentences, out, fingerprint,
+                    beforeCommit);
             try {
                 List<DocumentOutcome> outcomes = context.parallelize(parts, parts.size()).mapPartitions(work).collect();
                 return outcomes;

@@ -162,4 +162,29 @@ class AnnotateRerunTest {
                 .map(l -> l.substring(l.indexOf("\"doc\":\"") + 7, l.indexOf("\",\""))).toList();
         assertEquals(List.of("log-01.txt", "log-02.txt", "log-03.txt", "log-04.txt", "log-05.txt", "log-06.txt"), docs);
     }
+
+    @Test
+    void lineSentencesSplitEntriesWithoutPunctuationAndChangingTheOptionRedoesEveryDocument() throws Exception {
+        // Two log entries on two lines, neither with final punctuation.
+        Files.writeString(in.resolve("log-01.txt"), "Replaced the impeller on the bilge pump\nChecked the seals with the chief engineer\n",
+                StandardCharsets.UTF_8);
+        Path out = dir.resolve("out");
+        assertEquals(Tether.OK, annotate(out, "--threads", "1").exitCode());
+        assertFalse(summary(out).get("lineBreaksEndSentences").asBoolean());
+        String joined = Files.readString(out.resolve("log-01.txt.xmi"));
+        assertEquals(Tether.OK, annotate(out, "--threads", "1", "--line-sentences").exitCode());
+        assertEquals(0, summary(out).get("reused").asInt(), "the option changes the output, so nothing may be reused");
+        assertTrue(summary(out).get("lineBreaksEndSentences").asBoolean());
+        String split = Files.readString(out.resolve("log-01.txt.xmi"));
+        assertEquals(1, occurrences(joined, "<type:Sentence "), joined);
+        assertEquals(2, occurrences(split, "<type:Sentence "), split);
+        assertEquals(Tether.OK, annotate(out, "--threads", "1", "--line-sentences").exitCode());
+        assertEquals(LOGS.size(), summary(out).get("reused").asInt());
+    }
+
+    private static int occurrences(String text, String part) {
+        int n = 0;
+        for (int at = text.indexOf(part); at >= 0; at = text.indexOf(part, at + 1)) n++;
+        return n;
+    }
 }

@@ -105,6 +105,23 @@ class CommandsOnSparkTest {
     }
 
     @Test
+    void lineSentencesOnSparkWriteTheBytesOfTheRunOnThreads() throws Exception {
+        // Entries one per line without final punctuation: the option changes the sentences, on Spark as on threads.
+        Files.writeString(in.resolve("log-10.txt"), "Replaced the impeller on the bilge pump\nChecked the seals with the mate\n",
+                StandardCharsets.UTF_8);
+        Path threads = dir.resolve("threads");
+        Path onSpark = dir.resolve("spark");
+        CommandLineRun a = annotate(threads, "--threads", "2", "--line-sentences");
+        CommandLineRun b = annotate(onSpark, "--spark", "local[2]", "--line-sentences");
+        assertEquals(Tether.OK, a.exitCode(), a::toString);
+        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertEquals(OutputFiles.of(threads), OutputFiles.of(onSpark));
+        assertEquals(summaryWithoutTiming(threads), summaryWithoutTiming(onSpark));
+        String xmi = Files.readString(onSpark.resolve("log-10.txt.xmi"));
+        assertEquals(2, xmi.split("<type:Sentence ", -1).length - 1, xmi);
+    }
+
+    @Test
     void aDocumentThatFailsFailsAloneAndIsListedAsOnThreads() throws Exception {
         Files.write(in.resolve("log-05.txt"), new byte[] {'o', 'k', 0, 1, 2}); // binary
         Files.write(in.resolve("log-07.txt"), new byte[] {'a', (byte) 0xC3, '(', '\n'}); // not UTF-8

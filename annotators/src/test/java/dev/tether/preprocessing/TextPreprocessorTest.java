@@ -167,4 +167,52 @@ class TextPreprocessorTest {
         assertTrue(messages.toString().contains("Parameter " + TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS),
                 messages.toString());
     }
+
+    /** The covered texts of the sentences that {@code preprocessor} finds in {@code text}. */
+    private static List<String> sentenceTexts(AnalysisEngine preprocessor, String text) throws Exception {
+        JCas jcas = preprocessor.newJCas();
+        jcas.setDocumentText(text);
+        preprocessor.process(jcas);
+        return JCasUtil.select(jcas, Sentence.class).stream().map(Sentence::getCoveredText).toList();
+    }
+
+    @Test
+    void lineBreaksAreSpacesUnlessTheyAreAskedToEndSentences() throws Exception {
+        // Log entries one per line, without final punctuation.
+        String text = "Replaced the impeller on the bilge pump\nChecked the seals with the chief engineer\n"
+                + "Found oil in the bilge near the gearbox\n";
+        assertEquals(List.of(text.strip()), sentenceTexts(createEngine(TextPreprocessor.class), text));
+        AnalysisEngine byLine = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, true);
+        JCas jcas = byLine.newJCas();
+        jcas.setDocumentText(text);
+        byLine.process(jcas);
+        List<Sentence> sentences = new ArrayList<>(JCasUtil.select(jcas, Sentence.class));
+        assertEquals(List.of("Replaced the impeller on the bilge pump", "Checked the seals with the chief engineer",
+                "Found oil in the bilge near the gearbox"), sentences.stream().map(Sentence::getCoveredText).toList());
+        assertEquals(40, sentences.get(1).getBegin());
+        assertEquals(82, sentences.get(2).getBegin());
+        for (Sentence s : sentences) {
+            List<Token> tokens = JCasUtil.selectCovered(Token.class, s);
+            assertEquals(s.getBegin(), tokens.get(0).getBegin());
+            assertEquals(s.getEnd(), tokens.get(tokens.size() - 1).getEnd());
+        }
+    }
+
+    @Test
+    void everyKindOfLineBreakEndsASentenceAndALineStillSplitsAtItsOwnPunctuation() throws Exception {
+        AnalysisEngine byLine = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, true);
+        String text = "Replaced the seal. Checked the pump on deck\r\n\r\n   \r\nFound a leak\rLogged it\u0085"
+                + "Fitted a spare \uD83D\uDD27 on the pump\u2028Tested the alarm\u2029Closed the valve";
+        assertEquals(List.of("Replaced the seal.", "Checked the pump on deck", "Found a leak", "Logged it",
+                "Fitted a spare \uD83D\uDD27 on the pump", "Tested the alarm", "Closed the valve"), sentenceTexts(byLine, text));
+        assertEquals(List.of(), sentenceTexts(byLine, "\n\r\n  \n"));
+    }
+
+    @Test
+    void anOverLongLineIsStillCutIntoWindows() throws Exception {
+        AnalysisEngine byLine = createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, true,
+                TextPreprocessor.PARAM_MAX_SENTENCE_TOKENS, 4);
+        assertEquals(List.of("checked the pump on", "the port engine", "Logged it"),
+                sentenceTexts(byLine, "checked the pump on the port engine\nLogged it"));
+    }
 }
