@@ -38,7 +38,7 @@ import java.util.Set;
 final class ThesaurusCommand implements Command {
     private static final String BUILD = "thesaurus build --raw PATH... --out FILE [--contexts window|grammatical|all] "
             + "[--weighting relative|ppmi|ppmi-smoothed|ttest] [--measure cosine|lin|jaccard] [--min-frequency N] "
-            + "[--max-context-words N] [--neighbours K] [--lists-only] [--threads N | --spark MASTER]";
+            + "[--max-context-words N] [--neighbours K] [--lists-only] [--line-sentences] [--threads N | --spark MASTER]";
     private static final String QUERY = "thesaurus query --thesaurus FILE [--top N] WORD...";
     private static final String EVALUATE = "thesaurus evaluate --thesaurus FILE --pairs CSV [--json]";
 
@@ -92,6 +92,8 @@ final class ThesaurusCommand implements Command {
               --lists-only             keep the neighbour lists and drop the context vectors: a fraction of the
                                        size, all that attachment needs; 'evaluate' and the coordination features
                                        need the vectors
+              --line-sentences         every line break ends a sentence (text written one entry per line); by
+                                       default a line break is a space and the sentence detector decides
               --threads N              tagging and neighbour-search threads; default: all cores
               --spark MASTER           read, tag and count on Spark (local[N], spark://HOST:PORT, yarn); the
                                        thesaurus is the same, byte for byte
@@ -127,7 +129,7 @@ final class ThesaurusCommand implements Command {
 
     private int build(String[] args, PrintStream out) throws UsageException, IOException {
         CommandArguments a = new CommandArguments("thesaurus build", args, 2, Set.of("raw", "out", "contexts", "weighting",
-                "measure", "min-frequency", "max-context-words", "neighbours", "threads", "spark"), Set.of("lists-only"));
+                "measure", "min-frequency", "max-context-words", "neighbours", "threads", "spark"), Set.of("lists-only", "line-sentences"));
         noPositional(a, BUILD);
         if (!a.has("raw")) throw new UsageException("--raw is required: give the text files or folders to learn from");
         Path target = Path.of(a.required("out"));
@@ -165,7 +167,7 @@ final class ThesaurusCommand implements Command {
             RawTextCounting.Summary counted;
             String where;
             if (spark == null) {
-                counted = new RawTextCounting(threads).count(inputs, counter);
+                counted = new RawTextCounting(threads, a.has("line-sentences")).count(inputs, counter);
                 where = threads + " threads";
             } else {
                 List<String> locations = a.values("raw");
@@ -177,7 +179,7 @@ final class ThesaurusCommand implements Command {
                 SparkLibraries.require();
                 try (SparkJob job = SparkJob.start(spark, "tether thesaurus build")) {
                     job.checkExecutors(locations, null, null, null);
-                    counted = job.countContexts(locations, counter);
+                    counted = job.countContexts(locations, counter, a.has("line-sentences"));
                     where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
                 }
             }

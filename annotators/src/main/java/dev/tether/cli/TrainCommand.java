@@ -57,7 +57,7 @@ final class TrainCommand implements Command {
     public String usage() {
         return "train [--quadruples FILE...] [--conllu FILE...] [--raw PATH...] [--raw-counts FILE...]"
                 + " [--corrections SHEET... [--correction-weight W]] [--base MODEL|default] [--raw-weight W]"
-                + " [--reestimate ROUNDS] [--threads N | --spark MASTER] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
+                + " [--reestimate ROUNDS] [--line-sentences] [--threads N | --spark MASTER] [--save-raw-counts FILE] [--thesaurus FILE] [--skip-malformed] [--ranker-without FAMILY...] [--no-ranker] [--no-tagger] --out MODEL";
     }
 
     @Override
@@ -82,6 +82,8 @@ final class TrainCommand implements Command {
                 + "                        back-off has little evidence, nearest neighbours of verb, noun and object decide\n"
                 + "                        (one built with --lists-only serves attachment only)\n"
                 + "  --save-raw-counts F   also write the merged raw counts to F (atomically)\n"
+                + "  --line-sentences      in --raw text every line break ends a sentence (text written one entry per\n"
+                + "                        line); by default a line break is a space and the sentence detector decides\n"
                 + "  --threads N           threads that count raw text (default 1; the model is the same for any N)\n"
                 + "  --spark MASTER        count the raw text on Apache Spark instead: local[N] (embedded), spark://host:port,\n"
                 + "                        yarn, k8s://...; the model is byte for byte the one counted on threads\n"
@@ -102,10 +104,13 @@ final class TrainCommand implements Command {
         CommandArguments a = new CommandArguments(name(), args, 1,
                 Set.of("quadruples", "conllu", "corrections", "correction-weight", "base", "out", "ranker-without", "raw",
                         "raw-counts", "raw-weight", "reestimate", "threads", "spark", "save-raw-counts", "thesaurus"),
-                Set.of("skip-malformed", "no-ranker", "no-tagger"));
+                Set.of("skip-malformed", "no-ranker", "no-tagger", "line-sentences"));
         Path target = Path.of(a.required("out"));
         if (!a.has("quadruples") && !a.has("conllu") && !a.has("corrections") && !a.has("raw") && !a.has("raw-counts")) {
             throw new UsageException("give at least one training source with --quadruples, --conllu, --raw, --raw-counts or --corrections");
+        }
+        if (a.has("line-sentences") && !a.has("raw")) {
+            throw new UsageException("--line-sentences says how --raw text is split into sentences; give --raw too");
         }
         SparkMaster spark = SparkOption.master(a.value("spark", null));
         if (spark != null && a.has("threads")) {
@@ -148,13 +153,13 @@ final class TrainCommand implements Command {
                 RawTextAttachmentCounting.Summary summary;
                 String where;
                 if (spark == null) {
-                    summary = new RawTextAttachmentCounting(threads).count(inputs);
+                    summary = new RawTextAttachmentCounting(threads, a.has("line-sentences")).count(inputs);
                     where = threads + " thread" + (threads == 1 ? "" : "s");
                 } else {
                     SparkLibraries.require();
                     try (SparkJob job = SparkJob.start(spark, "tether train")) {
                         job.checkExecutors(a.values("raw"), null, null, null);
-                        summary = job.countRawText(a.values("raw"));
+                        summary = job.countRawText(a.values("raw"), a.has("line-sentences"));
                         where = "Spark " + spark.url() + ", " + job.parallelism() + " task slots";
                     }
                 }

@@ -50,10 +50,17 @@ public final class RawTextAttachmentCounting {
     }
 
     private final int threads;
+    private final boolean lineBreaksEndSentences;
 
     public RawTextAttachmentCounting(int threads) {
+        this(threads, false);
+    }
+
+    /** With {@code lineBreaksEndSentences}, every line break ends a sentence (see {@link TextPreprocessor}). */
+    public RawTextAttachmentCounting(int threads, boolean lineBreaksEndSentences) {
         if (threads < 1) throw new IllegalArgumentException("--threads must be at least 1, was " + threads);
         this.threads = threads;
+        this.lineBreaksEndSentences = lineBreaksEndSentences;
     }
 
     /** Counts every document under {@code inputs} (files, or folders of {@code .txt} files). */
@@ -83,7 +90,7 @@ public final class RawTextAttachmentCounting {
                 List<String[]> skipped = new ArrayList<>();
                 skippedPerThread.add(skipped);
                 workers.add(pool.submit(() -> {
-                    countShard(files, next, shard, skipped);
+                    countShard(files, next, shard, skipped, lineBreaksEndSentences);
                     return null;
                 }));
             }
@@ -112,8 +119,14 @@ public final class RawTextAttachmentCounting {
      * The Spark job runs the same flow.
      */
     public static AnalysisEngineDescription findingFlow() throws ResourceInitializationException {
+        return findingFlow(false);
+    }
+
+    /** The same flow; with {@code lineBreaksEndSentences} every line break ends a sentence. */
+    public static AnalysisEngineDescription findingFlow(boolean lineBreaksEndSentences) throws ResourceInitializationException {
         AggregateBuilder flow = new AggregateBuilder();
-        flow.add(AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false));
+        flow.add(AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false,
+                TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, lineBreaksEndSentences));
         flow.add(AnalysisEngineFactory.createEngineDescription(AttachmentCandidateFinder.class,
                 AttachmentCandidateFinder.PARAM_TAGSET, "penn"));
         return flow.createAggregateDescription();
@@ -142,10 +155,11 @@ public final class RawTextAttachmentCounting {
     }
 
     /** One thread: its own flow and CAS, documents taken from the shared position until none is left. */
-    private static void countShard(List<Path> files, AtomicInteger next, Path shard, List<String[]> skipped)
+    private static void countShard(List<Path> files, AtomicInteger next, Path shard, List<String[]> skipped,
+                                   boolean lineBreaksEndSentences)
             throws ResourceInitializationException, AnalysisEngineProcessException {
         AggregateBuilder flow = new AggregateBuilder();
-        flow.add(findingFlow());
+        flow.add(findingFlow(lineBreaksEndSentences));
         flow.add(AnalysisEngineFactory.createEngineDescription(UnlabelledAttachmentCounter.class,
                 UnlabelledAttachmentCounter.PARAM_COUNTS_FILE, shard.toString()));
         AnalysisEngine engine = flow.createAggregate();

@@ -60,10 +60,17 @@ public final class RawTextCounting {
     }
 
     private final int threads;
+    private final boolean lineBreaksEndSentences;
 
     public RawTextCounting(int threads) {
+        this(threads, false);
+    }
+
+    /** With {@code lineBreaksEndSentences}, every line break ends a sentence (see {@link RawTextTagger}). */
+    public RawTextCounting(int threads, boolean lineBreaksEndSentences) {
         if (threads < 1) throw new IllegalArgumentException("--threads must be at least 1, was " + threads);
         this.threads = threads;
+        this.lineBreaksEndSentences = lineBreaksEndSentences;
     }
 
     /** Receives the tagged sentences of the counted documents, in document order. */
@@ -92,7 +99,7 @@ public final class RawTextCounting {
         List<RawTextTagger> taggers = Collections.synchronizedList(new ArrayList<>());
         ThreadLocal<RawTextTagger> tagger = ThreadLocal.withInitial(() -> {
             try {
-                RawTextTagger t = new RawTextTagger();
+                RawTextTagger t = new RawTextTagger(lineBreaksEndSentences);
                 taggers.add(t);
                 return t;
             } catch (ResourceInitializationException e) {

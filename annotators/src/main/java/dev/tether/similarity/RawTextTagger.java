@@ -23,7 +23,13 @@ public final class RawTextTagger implements AutoCloseable {
     private final JCas jcas;
 
     public RawTextTagger() throws ResourceInitializationException {
-        engine = AnalysisEngineFactory.createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false);
+        this(false);
+    }
+
+    /** With {@code lineBreaksEndSentences}, every line break ends a sentence (see {@link TextPreprocessor}). */
+    public RawTextTagger(boolean lineBreaksEndSentences) throws ResourceInitializationException {
+        engine = AnalysisEngineFactory.createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false,
+                TextPreprocessor.PARAM_LINE_BREAKS_END_SENTENCES, lineBreaksEndSentences);
         try {
             jcas = CasCreationUtils.createCas(engine.getAnalysisEngineMetaData()).getJCas();
         } catch (org.apache.uima.cas.CASException e) {

@@ -18,12 +18,22 @@ import java.util.concurrent.ConcurrentLinkedQueue;
  * counts with it and a retried task never counts twice.
  */
 final class PartitionContextCounting implements Function2<Integer, Iterator<ArrayList<String>>, Iterator<ContextShard>> {
-    private static final Queue<RawTextTagger> IDLE = new ConcurrentLinkedQueue<>();
+    /** Idle taggers: [0] with line breaks as spaces, [1] with line breaks ending sentences. */
+    @SuppressWarnings("unchecked")
+    private static final Queue<RawTextTagger>[] IDLE = new Queue[] {new ConcurrentLinkedQueue<RawTextTagger>(),
+            new ConcurrentLinkedQueue<RawTextTagger>()};
+
+    private final boolean lineBreaksEndSentences;
+
+    PartitionContextCounting(boolean lineBreaksEndSentences) {
+        this.lineBreaksEndSentences = lineBreaksEndSentences;
+    }
 
     @Override
     public Iterator<ContextShard> call(Integer partition, Iterator<ArrayList<String>> files) throws Exception {
-        RawTextTagger tagger = IDLE.poll();
-        if (tagger == null) tagger = new RawTextTagger();
+        Queue<RawTextTagger> idle = IDLE[lineBreaksEndSentences ? 1 : 0];
+        RawTextTagger tagger = idle.poll();
+        if (tagger == null) tagger = new RawTextTagger(lineBreaksEndSentences);
         ContextCounter counter = new ContextCounter();
         List<String[]> skipped = new ArrayList<>();
         int documents = 0;
@@ -40,13 +50,15 @@ final class PartitionContextCounting implements Function2<Integer, Iterator<Arra
                 }
             }
         } finally {
-            IDLE.add(tagger);
+            idle.add(tagger);
         }
         return List.of(new ContextShard(partition, counter.toBytes(), documents, skipped)).iterator();
     }
 
     /** Releases the idle taggers (the end of an embedded run). */
     static void closeAll() {
-        for (RawTextTagger t = IDLE.poll(); t != null; t = IDLE.poll()) t.close();
+        for (Queue<RawTextTagger> idle : IDLE) {
+            for (RawTextTagger t = idle.poll(); t != null; t = idle.poll()) t.close();
+        }
     }
 }

@@ -33,12 +33,16 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
     private record Flow(AnalysisEngine engine, JCas jcas) {
     }
 
-    private static final Queue<Flow> IDLE = new ConcurrentLinkedQueue<>();
+    /** Idle flows: [0] with line breaks as spaces, [1] with line breaks ending sentences. */
+    @SuppressWarnings("unchecked")
+    private static final Queue<Flow>[] IDLE = new Queue[] {new ConcurrentLinkedQueue<Flow>(), new ConcurrentLinkedQueue<Flow>()};
     private static final AtomicInteger BUILT = new AtomicInteger();
 
+    private final boolean lineBreaksEndSentences;
     private final AfterDocument afterDocument;
 
-    PartitionCounting(AfterDocument afterDocument) {
+    PartitionCounting(boolean lineBreaksEndSentences, AfterDocument afterDocument) {
+        this.lineBreaksEndSentences = lineBreaksEndSentences;
         this.afterDocument = afterDocument;
     }
 
@@ -47,9 +51,10 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
         List<String> files = new java.util.ArrayList<>();
         partition.forEachRemaining(files::addAll);
         TaskContext task = TaskContext.get();
-        Flow flow = IDLE.poll();
+        Queue<Flow> idle = IDLE[lineBreaksEndSentences ? 1 : 0];
+        Flow flow = idle.poll();
         if (flow == null) {
-            AnalysisEngine engine = AnalysisEngineFactory.createEngine(RawTextAttachmentCounting.findingFlow());
+            AnalysisEngine engine = AnalysisEngineFactory.createEngine(RawTextAttachmentCounting.findingFlow(lineBreaksEndSentences));
             flow = new Flow(engine, CasCreationUtils.createCas(engine.getAnalysisEngineMetaData()).getJCas());
             BUILT.incrementAndGet();
         }
@@ -69,7 +74,7 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
             flow.jcas().reset();
             shard.freeze();
         } finally {
-            IDLE.add(flow);
+            idle.add(flow);
         }
         return List.of(shard).iterator();
     }
@@ -81,6 +86,8 @@ final class PartitionCounting implements FlatMapFunction<Iterator<java.util.Arra
 
     /** Releases the idle flows (the end of an embedded run). */
     static void closeAll() {
-        for (Flow f = IDLE.poll(); f != null; f = IDLE.poll()) f.engine().destroy();
+        for (Queue<Flow> idle : IDLE) {
+            for (Flow f = idle.poll(); f != null; f = idle.poll()) f.engine().destroy();
+        }
     }
 }

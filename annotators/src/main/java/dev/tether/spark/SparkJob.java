@@ -164,11 +164,21 @@ public final class SparkJob implements AutoCloseable {
      * by Spark's tree aggregation (results of completed tasks only).
      */
     public RawTextAttachmentCounting.Summary countRawText(List<String> inputs) throws IOException {
-        return countRawText(inputs, null);
+        return countRawText(inputs, false, null);
+    }
+
+    /** The same; with {@code lineBreaksEndSentences} every line break ends a sentence. */
+    public RawTextAttachmentCounting.Summary countRawText(List<String> inputs, boolean lineBreaksEndSentences) throws IOException {
+        return countRawText(inputs, lineBreaksEndSentences, null);
     }
 
     RawTextAttachmentCounting.Summary countRawText(List<String> inputs, PartitionCounting.AfterDocument afterDocument)
             throws IOException {
+        return countRawText(inputs, false, afterDocument);
+    }
+
+    private RawTextAttachmentCounting.Summary countRawText(List<String> inputs, boolean lineBreaksEndSentences,
+                                                           PartitionCounting.AfterDocument afterDocument) throws IOException {
         long start = System.nanoTime();
         InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
@@ -176,7 +186,7 @@ public final class SparkJob implements AutoCloseable {
         List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), listed.sizes()::get);
         CountShard all;
         try {
-            all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(afterDocument))
+            all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(lineBreaksEndSentences, afterDocument))
                     .treeAggregate(new CountShard(), CountShard::merge, CountShard::merge, AGGREGATION_DEPTH);
         } catch (RuntimeException e) {
             throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
@@ -200,6 +210,12 @@ public final class SparkJob implements AutoCloseable {
      * its own; the driver appends the completed tasks' counters in partition order.
      */
     public RawTextCounting.Summary countContexts(List<String> inputs, ContextCounter into) throws IOException {
+        return countContexts(inputs, into, false);
+    }
+
+    /** The same; with {@code lineBreaksEndSentences} every line break ends a sentence. */
+    public RawTextCounting.Summary countContexts(List<String> inputs, ContextCounter into, boolean lineBreaksEndSentences)
+            throws IOException {
         long start = System.nanoTime();
         InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
@@ -208,7 +224,7 @@ public final class SparkJob implements AutoCloseable {
         List<ContextShard> shards;
         try {
             shards = new ArrayList<>(context.parallelize(parts, Math.max(1, parts.size()))
-                    .mapPartitionsWithIndex(new PartitionContextCounting(), false).collect());
+                    .mapPartitionsWithIndex(new PartitionContextCounting(lineBreaksEndSentences), false).collect());
         } catch (RuntimeException e) {
             throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
         } finally {

@@ -69,7 +69,8 @@ class CommandLineStrictnessTest {
                 new String[] {"evaluate", "--model", "default", "--quadruples", in.toString(), "-json"},
                 new String[] {"inspect", "default", "another"},
                 new String[] {"annotate", "--in", in.toString(), "--out", out, "--threads", "0"},
-                new String[] {"annotate", "--in", in.toString(), "--out", out, "--threads", "two"});
+                new String[] {"annotate", "--in", in.toString(), "--out", out, "--threads", "two"},
+                new String[] {"train", "--quadruples", in.toString(), "--line-sentences", "--out", out});
         for (String[] args : wrong) {
             CommandLineRun run = CommandLineRun.of(args);
             assertEquals(Tether.USAGE, run.exitCode(), () -> String.join(" ", args) + "\n" + run);

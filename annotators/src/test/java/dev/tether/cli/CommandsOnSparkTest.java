@@ -195,6 +195,48 @@ class CommandsOnSparkTest {
     }
 
     @Test
+    void lineSentencesInTrainAndThesaurusGiveTheSameBytesOnSparkAsOnThreadsAndOtherCountsThanWithout() throws Exception {
+        // Log entries one per line, without final punctuation: by default they run together into one sentence.
+        Path raw = Files.createDirectory(dir.resolve("lines"));
+        for (int d = 0; d < 12; d++) {
+            StringBuilder text = new StringBuilder();
+            for (int k = 0; k < 5; k++) {
+                String entry = LOGS.get((d * 5 + k) % LOGS.size()).strip();
+                text.append(entry, 0, entry.length() - 1).append('\n');
+            }
+            Files.writeString(raw.resolve(String.format("shift-%02d.txt", d)), text.toString());
+        }
+        Path joined = dir.resolve("joined.tether");
+        Path onThreads = dir.resolve("threads.tether");
+        Path onSpark = dir.resolve("spark.tether");
+        assertEquals(Tether.OK, CommandLineRun.of("train", "--raw", raw.toString(), "--out", joined.toString()).exitCode());
+        CommandLineRun a = CommandLineRun.of("train", "--raw", raw.toString(), "--line-sentences", "--out", onThreads.toString(),
+                "--threads", "2");
+        CommandLineRun b = CommandLineRun.of("train", "--raw", raw.toString(), "--line-sentences", "--out", onSpark.toString(),
+                "--spark", "local[2]");
+        assertEquals(Tether.OK, a.exitCode(), a::toString);
+        assertEquals(Tether.OK, b.exitCode(), b::toString);
+        assertArrayEquals(Files.readAllBytes(onThreads), Files.readAllBytes(onSpark), a + "\n" + b);
+        assertFalse(java.util.Arrays.equals(Files.readAllBytes(joined), Files.readAllBytes(onThreads)),
+                "sentences split at the line breaks must change the counts");
+
+        Path thesaurusOnThreads = dir.resolve("threads.thesaurus");
+        Path thesaurusOnSpark = dir.resolve("spark.thesaurus");
+        CommandLineRun c = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--line-sentences",
+                "--out", thesaurusOnThreads.toString(), "--min-frequency", "2", "--threads", "2");
+        CommandLineRun d = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--line-sentences",
+                "--out", thesaurusOnSpark.toString(), "--min-frequency", "2", "--spark", "local[2]");
+        assertEquals(Tether.OK, c.exitCode(), c::toString);
+        assertEquals(Tether.OK, d.exitCode(), d::toString);
+        assertArrayEquals(Files.readAllBytes(thesaurusOnThreads), Files.readAllBytes(thesaurusOnSpark), c + "\n" + d);
+        // 12 documents of 5 lines: 60 sentences when every line break ends one, fewer when the entries run together.
+        assertTrue(c.out().contains("read     12 documents, 60 sentences"), c::toString);
+        CommandLineRun e = CommandLineRun.of("thesaurus", "build", "--raw", raw.toString(), "--out",
+                dir.resolve("joined.thesaurus").toString(), "--min-frequency", "2", "--threads", "2");
+        assertFalse(e.out().contains("12 documents, 60 sentences"), e::toString);
+    }
+
+    @Test
     void aFileSystemUriWithoutSparkOrThatDoesNotExistIsAnErrorBeforeAnyOutput() throws Exception {
         Path raw = writeRawText();
         Path model = dir.resolve("m.tether");
