@@ -49,10 +49,13 @@ import java.util.stream.Stream;
  * </ul>
  * The mean gain over the genres gets an interval from the same resamples (position by position: the genres' dev
  * parts are independent). With {@code --other-raw}, a second setting C adds the raw text of every corpus under
- * {@code ../shared/datasets/raw/} (counted once) to B's sources.
+ * {@code ../shared/datasets/raw/} (counted once) to B's sources. With {@code --raw-weight W}, B's raw text counts W
+ * instead of the weight the folds choose (what {@code train --raw-weight W} does); with {@code --line-sentences}, the
+ * raw text is counted with every line break ending a sentence ({@code train --line-sentences}), so that its sentences
+ * are the treebank's.
  *
  * <pre>
- * java -Xmx6g -cp ... dev.tether.evaluation.GenreAdaptation [--other-raw] [GENRE...]
+ * java -Xmx6g -cp ... dev.tether.evaluation.GenreAdaptation [--other-raw] [--raw-weight W] [--line-sentences] [GENRE...]
  * </pre>
  * Reads {@code ../shared/datasets}; see DEVELOPERS.md for the class path.
  */
@@ -71,12 +74,21 @@ public final class GenreAdaptation {
                            double[] gainsC) {
     }
 
+    /** B's raw weight when given ({@code --raw-weight}); otherwise NaN and the folds choose it. */
+    private static double fixedWeight = Double.NaN;
+    /** Whether the raw text is counted with line breaks ending sentences ({@code --line-sentences}). */
+    private static boolean lineSentences;
+
     public static void main(String[] args) throws Exception {
         Path root = Files.exists(Path.of("test-corpora")) ? Path.of(".") : Path.of("..");
         Path shared = root.resolve("../shared/datasets");
         boolean otherRaw = List.of(args).contains("--other-raw");
+        lineSentences = List.of(args).contains("--line-sentences");
         List<String> genres = new ArrayList<>();
-        for (String a : args) if (!a.startsWith("--")) genres.add(a);
+        for (int i = 0; i < args.length; i++) {
+            if (args[i].equals("--raw-weight")) fixedWeight = Double.parseDouble(args[++i]);
+            else if (!args[i].startsWith("--")) genres.add(args[i]);
+        }
         for (String g : genres) {
             if (!GENRES.contains(g)) throw new IllegalArgumentException("unknown genre '" + g + "'; one of " + GENRES);
         }
@@ -125,7 +137,7 @@ public final class GenreAdaptation {
         taggerTrainer.add(trees);
         TaggerSection tagger = taggerTrainer.train();
         String treesSha = Sha256.hex(Files.readAllBytes(trees));
-        RawTextAttachmentCounting.Summary counted = new RawTextAttachmentCounting(1).count(List.of(rawFolder));
+        RawTextAttachmentCounting.Summary counted = new RawTextAttachmentCounting(1, lineSentences).count(List.of(rawFolder));
         RawAttachmentCounts raw = counted.counts();
         RawAttachmentCounts.Tally t = raw.tally();
         System.out.printf(Locale.ROOT, "%s: trees of the other four genres: %,d sentences, %,d attachment examples;"
@@ -137,11 +149,16 @@ public final class GenreAdaptation {
 
         TetherModel a = trainer(rrr, examples, trees, treesSha, tagger).build();
         ModelTrainer bTrainer = trainer(rrr, examples, trees, treesSha, tagger);
-        RawWeightChoice.Result choice = bTrainer.addRawCountsChoosingWeight(raw, "raw-" + g, RAW_ROUNDS);
+        if (Double.isNaN(fixedWeight)) {
+            RawWeightChoice.Result choice = bTrainer.addRawCountsChoosingWeight(raw, "raw-" + g, RAW_ROUNDS);
+            System.out.printf(Locale.ROOT, "%s: raw weight %s chosen on %d folds of %,d labelled quadruples (held-out"
+                            + " backed-off accuracy %s; without raw %.2f%%)%n",
+                    g, choice.weight(), RawWeightChoice.FOLDS, choice.quadruples(), foldRow(choice), 100 * choice.withoutRaw());
+        } else {
+            bTrainer.addRawCounts(raw, "raw-" + g, fixedWeight, RAW_ROUNDS);
+            System.out.printf(Locale.ROOT, "%s: raw weight %s given%n", g, fixedWeight);
+        }
         TetherModel b = bTrainer.build();
-        System.out.printf(Locale.ROOT, "%s: raw weight %s chosen on %d folds of %,d labelled quadruples (held-out"
-                        + " backed-off accuracy %s; without raw %.2f%%)%n",
-                g, choice.weight(), RawWeightChoice.FOLDS, choice.quadruples(), foldRow(choice), 100 * choice.withoutRaw());
         SentenceOutcomes c = null;
         if (other != null) {
             RawAttachmentCountsBuilder both = new RawAttachmentCountsBuilder();
