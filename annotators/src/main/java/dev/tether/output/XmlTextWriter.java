@@ -1,11 +1,7 @@
 package dev.tether.output;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.OutputStreamWriter;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 
 import org.xml.sax.Attributes;
@@ -29,18 +25,83 @@ import org.xml.sax.SAXException;
  * U+FFFE, U+FFFF, and in XML 1.0 the C0 controls) is an error naming it; no output is then usable, as the caller's
  * temporary file is not committed.
  *
+ * <p>The characters are encoded as UTF-8 here, into a buffer of its own that goes to the stream when full: a
+ * {@code BufferedWriter} in front of the JDK's encoder took a lock and a bounds check for every one of the many short
+ * writes of markup, and was the largest single cost of writing XMI.
+ *
  * <p>For one document; not thread-safe.
  */
 final class XmlTextWriter implements ContentHandler {
-    private final Writer out;
+    private final Utf8Buffer out;
     private final boolean xml11;
     /** Whether the last start tag is still open (its {@code >} or {@code />} not yet written). */
     private boolean open;
 
     XmlTextWriter(OutputStream stream, boolean xml11) {
-        // Buffered in front of the encoder: the encoder wraps every write it is handed in a buffer object of its own.
-        this.out = new BufferedWriter(new OutputStreamWriter(stream, StandardCharsets.UTF_8), 1 << 14);
+        this.out = new Utf8Buffer(stream);
         this.xml11 = xml11;
+    }
+
+    /**
+     * Characters encoded as UTF-8 into a byte buffer that is written to the stream when full and on {@link #flush}. A
+     * surrogate pair is encoded as its one code point; the writer has checked before that every surrogate is paired.
+     */
+    private static final class Utf8Buffer {
+        private final OutputStream stream;
+        private final byte[] bytes = new byte[1 << 15];
+        private int size;
+
+        Utf8Buffer(OutputStream stream) {
+            this.stream = stream;
+        }
+
+        void write(char c) throws IOException {
+            if (c < 0x80) {
+                if (size == bytes.length) drain();
+                bytes[size++] = (byte) c;
+            } else {
+                write(String.valueOf(c), 0, 1);
+            }
+        }
+
+        void write(String s) throws IOException {
+            write(s, 0, s.length());
+        }
+
+        /** Writes the {@code length} characters of {@code s} from {@code from}. */
+        void write(String s, int from, int length) throws IOException {
+            int end = from + length;
+            for (int i = from; i < end; i++) {
+                char c = s.charAt(i);
+                if (size > bytes.length - 4) drain();
+                if (c < 0x80) {
+                    bytes[size++] = (byte) c;
+                } else if (c < 0x800) {
+                    bytes[size++] = (byte) (0xC0 | c >> 6);
+                    bytes[size++] = (byte) (0x80 | c & 0x3F);
+                } else if (Character.isHighSurrogate(c) && i + 1 < end && Character.isLowSurrogate(s.charAt(i + 1))) {
+                    int cp = Character.toCodePoint(c, s.charAt(++i));
+                    bytes[size++] = (byte) (0xF0 | cp >> 18);
+                    bytes[size++] = (byte) (0x80 | cp >> 12 & 0x3F);
+                    bytes[size++] = (byte) (0x80 | cp >> 6 & 0x3F);
+                    bytes[size++] = (byte) (0x80 | cp & 0x3F);
+                } else {
+                    bytes[size++] = (byte) (0xE0 | c >> 12);
+                    bytes[size++] = (byte) (0x80 | c >> 6 & 0x3F);
+                    bytes[size++] = (byte) (0x80 | c & 0x3F);
+                }
+            }
+        }
+
+        private void drain() throws IOException {
+            stream.write(bytes, 0, size);
+            size = 0;
+        }
+
+        void flush() throws IOException {
+            drain();
+            stream.flush();
+        }
     }
 
     @Override

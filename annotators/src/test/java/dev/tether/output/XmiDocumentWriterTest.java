@@ -90,7 +90,9 @@ class XmiDocumentWriterTest {
         for (String text : List.of(
                 "The mate wrote \"leak <2 l/h> & rising\" in the book of the Tern Hollow.\r\nChecked the pump on deck 'B'.\n",
                 "Replaced the seal\ton the pump with a spare from the stores.\rLogged it in the book > twice.\n",
-                "Fitted a spare \uD83D\uDD27 on the pump at 3 litres per \uD835\uDC58\uD835\uDC54 of oil.\n")) {
+                "Fitted a spare \uD83D\uDD27 on the pump at 3 litres per \uD835\uDC58\uD835\uDC54 of oil.\n",
+                // Two- and three-byte UTF-8: accents, the euro sign, a dash, a CJK character beside a four-byte one.
+                "Caf\u00e9 crew fitted the s\u00fc\u00df seal for 40 \u20ac \u2014 logged \u4e2d\uD83D\uDD27 twice.\n")) {
             sameCasAsUimasOwnSerializer(text);
         }
     }
