@@ -7,8 +7,11 @@ package dev.tether.candidates;
 public enum HeadClass {
     VERB, NOUN, ADJECTIVE, ADVERB;
 
+    /** Each constant's label, made once: the engines ask for it for every candidate they write. */
+    private final String label = name().toLowerCase(java.util.Locale.ROOT);
+
     /** The lower-case name used in annotations, ledgers and reports. */
     public String label() {
-        return name().toLowerCase(java.util.Locale.ROOT);
+        return label;
     }
 }
