@@ -46,7 +46,7 @@ final class XmlTextWriter implements ContentHandler {
      * Characters encoded as UTF-8 into a byte buffer that is written to the stream when full and on {@link #flush}. A
      * surrogate pair is encoded as its one code point; the writer has checked before that every surrogate is paired.
      */
-    private static final class Utf8Buffer {
+    static final class Utf8Buffer {
         private final OutputStream stream;
         private final byte[] bytes = new byte[1 << 15];
         private int size;
@@ -85,6 +85,8 @@ final class XmlTextWriter implements ContentHandler {
                     bytes[size++] = (byte) (0x80 | cp >> 12 & 0x3F);
                     bytes[size++] = (byte) (0x80 | cp >> 6 & 0x3F);
                     bytes[size++] = (byte) (0x80 | cp & 0x3F);
+                } else if (Character.isSurrogate(c)) {
+                    throw new IOException(String.format(Locale.ROOT, "unpaired surrogate U+%04X cannot be encoded as UTF-8", (int) c));
                 } else {
                     bytes[size++] = (byte) (0xE0 | c >> 12);
                     bytes[size++] = (byte) (0x80 | c >> 6 & 0x3F);

@@ -98,6 +98,22 @@ class XmiDocumentWriterTest {
     }
 
     @Test
+    void multiByteCharactersAcrossTheEncodersBufferBoundariesComeBackAsWritten() throws Exception {
+        // More than 64 KB of text with 2-, 3- and 4-byte characters at shifting offsets, so that the writer's 32 KB
+        // buffer fills up next to each kind of character.
+        StringBuilder text = new StringBuilder();
+        String[] marks = {"\u00e9", "\u20ac", "\u4e2d", "\uD83D\uDD27", "\u00fc\u2014"};
+        for (int i = 0; text.length() < 70_000; i++) {
+            text.append("x".repeat(i % 7)).append("Fitted a spare ").append(marks[i % marks.length]).append(" on the pump ")
+                    .append(marks[(i + 2) % marks.length]).append(". ");
+        }
+        sameCasAsUimasOwnSerializer(text.toString());
+        byte[] ours = ours(annotated(text.toString()));
+        assertTrue(new String(ours, java.nio.charset.StandardCharsets.UTF_8).contains(text.substring(60_000, 60_200)
+                .replace("&", "&amp;")), "the text is in the file, encoded as UTF-8");
+    }
+
+    @Test
     void controlCharactersComeBackFromXml11() throws Exception {
         String text = "Replaced the gasket on the pump.\f\nPage 2: logged the repair\u000B in the book of the ferry.\n";
         byte[] ours = ours(annotated(text));

@@ -28,7 +28,8 @@ import java.util.Map;
  * averaging of Dagan, Lee &amp; Pereira 1999). Training rows take their counts from the other four fifths of the
  * training split (a jackknife), so that the weights see counts as they are for unseen items; the development items
  * take theirs from the whole split. Prints, for each L2 strength, 5-fold cross-validated accuracy on the jackknifed
- * training rows and accuracy on the development set, without and with the thesaurus evidence.
+ * training rows and accuracy on the development set, without and with the thesaurus evidence, and then the devset
+ * accuracy of the strength the folds choose (the best fold accuracy; ties: the first).
  *
  * <p>Arguments: TRAINING DEVSET THESAURUS [K]. Run from the repository root after {@code mvn -pl models test-compile}:
  * {@code java -cp "models/target/test-classes:models/target/classes:$(cat cp.txt)"
@@ -62,6 +63,12 @@ public final class LearnedQuadrupleMeasurement {
         List<LabelledQuadruple> dev = new QuadrupleReader(false).read(Path.of(args[1])).quadruples();
         Thesaurus thesaurus = ThesaurusFile.read(Path.of(args[2]));
         int k = args.length > 3 ? Integer.parseInt(args[3]) : 20;
+        int stored = 0;
+        for (int t = 0; t < thesaurus.size(); t++) stored = Math.max(stored, thesaurus.neighbourCount(t));
+        if (k > stored) {
+            System.out.printf("%s holds at most %d neighbours per word; k %d uses those%n", args[2], stored, k);
+            k = stored;
+        }
         LearnedQuadrupleMeasurement m = new LearnedQuadrupleMeasurement(training, thesaurus, k);
         QuadrupleCounts all = m.count(training);
         BackedOffScorer plain = new BackedOffScorer(all);
@@ -93,6 +100,7 @@ public final class LearnedQuadrupleMeasurement {
                 devRows.add(m.features(all, ids, lq.quadruple(), withNeighbours));
                 devNouns.add(lq.site() == AttachmentSite.NOUN);
             }
+            double bestFolds = -1, chosenDev = 0, chosenL2 = 0;
             for (double l2 : new double[] {0.1, 1, 10}) {
                 int folded = 0;
                 for (int f = 0; f < FOLDS; f++) {
@@ -107,10 +115,17 @@ public final class LearnedQuadrupleMeasurement {
                     folded += correct(fit(fitRows, fitNouns, l2), testRows, testNouns);
                 }
                 double[] w = fit(rows, nouns, l2);
+                double devAccuracy = (double) correct(w, devRows, devNouns) / devRows.size();
                 System.out.printf("%s, l2 %s: training folds %.2f%%, development set %.2f%%%n",
                         withNeighbours ? "with neighbours (k " + k + ")" : "back-off evidence only", l2,
-                        100.0 * folded / rows.size(), 100.0 * correct(w, devRows, devNouns) / devRows.size());
+                        100.0 * folded / rows.size(), 100 * devAccuracy);
+                if (folded > bestFolds) {
+                    bestFolds = folded;
+                    chosenDev = devAccuracy;
+                    chosenL2 = l2;
+                }
             }
+            System.out.printf("  l2 chosen on the folds: %s, development set %.2f%%%n", chosenL2, 100 * chosenDev);
         }
     }
 

@@ -52,7 +52,7 @@ import java.util.stream.Stream;
  * {@code ../shared/datasets/raw/} (counted once) to B's sources. With {@code --raw-weight W}, B's raw text counts W
  * instead of the weight the folds choose (what {@code train --raw-weight W} does); with {@code --line-sentences}, the
  * raw text is counted with every line break ending a sentence ({@code train --line-sentences}), so that its sentences
- * are the treebank's.
+ * are the treebank's. Setting C counts the other corpora as before and chooses its weight on the folds either way.
  *
  * <pre>
  * java -Xmx6g -cp ... dev.tether.evaluation.GenreAdaptation [--other-raw] [--raw-weight W] [--line-sentences] [GENRE...]
@@ -86,8 +86,20 @@ public final class GenreAdaptation {
         lineSentences = List.of(args).contains("--line-sentences");
         List<String> genres = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
-            if (args[i].equals("--raw-weight")) fixedWeight = Double.parseDouble(args[++i]);
-            else if (!args[i].startsWith("--")) genres.add(args[i]);
+            if (args[i].equals("--raw-weight")) {
+                if (i + 1 == args.length) throw new IllegalArgumentException("--raw-weight needs a positive number after it");
+                fixedWeight = Double.parseDouble(args[++i]);
+                if (!(fixedWeight > 0) || Double.isInfinite(fixedWeight)) {
+                    throw new IllegalArgumentException("--raw-weight must be a positive number, got " + args[i]);
+                }
+            } else if (args[i].startsWith("--")) {
+                if (!args[i].equals("--other-raw") && !args[i].equals("--line-sentences")) {
+                    throw new IllegalArgumentException("unknown option " + args[i]
+                            + "; give --other-raw, --raw-weight W, --line-sentences and genre names");
+                }
+            } else {
+                genres.add(args[i]);
+            }
         }
         for (String g : genres) {
             if (!GENRES.contains(g)) throw new IllegalArgumentException("unknown genre '" + g + "'; one of " + GENRES);
