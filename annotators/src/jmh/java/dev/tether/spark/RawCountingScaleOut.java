@@ -88,7 +88,7 @@ public class RawCountingScaleOut {
 
     private RawTextAttachmentCounting.Summary countOnSpark() throws IOException {
         job.checkExecutors(List.of(work.toString()), null, null, null); // part of every run on Spark, so part of the shot
-        return job.countRawText(List.of(work.toString()));
+        return job.countRawText(List.of(work.toString()), false);
     }
 
     @TearDown(Level.Trial)

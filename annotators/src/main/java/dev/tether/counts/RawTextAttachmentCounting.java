@@ -116,13 +116,8 @@ public final class RawTextAttachmentCounting {
     /**
      * The flow that prepares a raw document for counting: the built-in preprocessing (the shipped model's tagger, no
      * chunks) and the candidate finder, which writes the ambiguities that {@link UnlabelledAttachmentCounter} counts.
-     * The Spark job runs the same flow.
+     * The Spark job runs the same flow. With {@code lineBreaksEndSentences} every line break ends a sentence.
      */
-    public static AnalysisEngineDescription findingFlow() throws ResourceInitializationException {
-        return findingFlow(false);
-    }
-
-    /** The same flow; with {@code lineBreaksEndSentences} every line break ends a sentence. */
     public static AnalysisEngineDescription findingFlow(boolean lineBreaksEndSentences) throws ResourceInitializationException {
         AggregateBuilder flow = new AggregateBuilder();
         flow.add(AnalysisEngineFactory.createEngineDescription(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false,

@@ -1,6 +1,8 @@
 package dev.tether.preprocessing;
 
 import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.function.Function;
 import java.util.function.UnaryOperator;
 
@@ -197,7 +199,7 @@ public class TextPreprocessor extends JCasAnnotator_ImplBase {
     /** The sentences of {@code text}, as the detector finds them in the whole text or in each line. */
     private Span[] sentences(String text) {
         if (!lineBreaksEndSentences) return CodePointSpans.align(sentenceDetector.sentPosDetect(text), text);
-        java.util.List<Span> all = new java.util.ArrayList<>();
+        List<Span> all = new ArrayList<>();
         int start = 0;
         while (start < text.length()) {
             int end = start;

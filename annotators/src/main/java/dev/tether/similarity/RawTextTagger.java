@@ -22,10 +22,6 @@ public final class RawTextTagger implements AutoCloseable {
     private final AnalysisEngine engine;
     private final JCas jcas;
 
-    public RawTextTagger() throws ResourceInitializationException {
-        this(false);
-    }
-
     /** With {@code lineBreaksEndSentences}, every line break ends a sentence (see {@link TextPreprocessor}). */
     public RawTextTagger(boolean lineBreaksEndSentences) throws ResourceInitializationException {
         engine = AnalysisEngineFactory.createEngine(TextPreprocessor.class, TextPreprocessor.PARAM_CHUNK, false,

@@ -123,24 +123,18 @@ public final class SparkJob implements AutoCloseable {
         if (!problems.isEmpty()) throw new IOException(String.join("\n", problems));
     }
 
-    /** The annotation job for {@link CollectionRun#run(CollectionRun.Elsewhere)}. */
-    public CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, Path out) {
-        return annotation(model, modelId, chunks, false, out, null);
-    }
-
-    /** The annotation job; with {@code lineBreaksEndSentences} every line break ends a sentence. */
+    /**
+     * The annotation job for {@link CollectionRun#run(CollectionRun.Elsewhere)}; with {@code lineBreaksEndSentences}
+     * every line break ends a sentence.
+     */
     public CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences,
                                               Path out) {
         return annotation(model, modelId, chunks, lineBreaksEndSentences, out, null);
     }
 
-    CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, Path out,
-                                       PartitionAnnotation.BeforeCommit beforeCommit) {
-        return annotation(model, modelId, chunks, false, out, beforeCommit);
-    }
-
-    private CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences,
-                                               Path out, PartitionAnnotation.BeforeCommit beforeCommit) {
+    /** The same, calling {@code beforeCommit} before each document's files are renamed (a test's fault injection). */
+    CollectionRun.Elsewhere annotation(String model, String modelId, boolean chunks, boolean lineBreaksEndSentences,
+                                       Path out, PartitionAnnotation.BeforeCommit beforeCommit) {
         return (tasks, fingerprint) -> {
             List<ArrayList<DocumentTask>> parts = BalancedPartitions.of(tasks, PARTITIONS_PER_SLOT * parallelism(),
                     t -> new File(t.file()).length());
@@ -163,22 +157,13 @@ public final class SparkJob implements AutoCloseable {
      * partition's documents are counted into one shard of Tether's mergeable count tables, and the shards are combined
      * by Spark's tree aggregation (results of completed tasks only).
      */
-    public RawTextAttachmentCounting.Summary countRawText(List<String> inputs) throws IOException {
-        return countRawText(inputs, false, null);
-    }
-
-    /** The same; with {@code lineBreaksEndSentences} every line break ends a sentence. */
     public RawTextAttachmentCounting.Summary countRawText(List<String> inputs, boolean lineBreaksEndSentences) throws IOException {
         return countRawText(inputs, lineBreaksEndSentences, null);
     }
 
-    RawTextAttachmentCounting.Summary countRawText(List<String> inputs, PartitionCounting.AfterDocument afterDocument)
-            throws IOException {
-        return countRawText(inputs, false, afterDocument);
-    }
-
-    private RawTextAttachmentCounting.Summary countRawText(List<String> inputs, boolean lineBreaksEndSentences,
-                                                           PartitionCounting.AfterDocument afterDocument) throws IOException {
+    /** The same, calling {@code afterDocument} after each counted document (a test's fault injection). */
+    RawTextAttachmentCounting.Summary countRawText(List<String> inputs, boolean lineBreaksEndSentences,
+                                                   PartitionCounting.AfterDocument afterDocument) throws IOException {
         long start = System.nanoTime();
         InputLocations.Documents listed = InputLocations.list(inputs, context.hadoopConfiguration());
         List<String> files = listed.files();
@@ -186,7 +171,8 @@ public final class SparkJob implements AutoCloseable {
         List<ArrayList<String>> parts = BalancedPartitions.of(files, PARTITIONS_PER_SLOT * parallelism(), listed.sizes()::get);
         CountShard all;
         try {
-            all = context.parallelize(parts, Math.max(1, parts.size())).mapPartitions(new PartitionCounting(lineBreaksEndSentences, afterDocument))
+            all = context.parallelize(parts, Math.max(1, parts.size()))
+                    .mapPartitions(new PartitionCounting(lineBreaksEndSentences, afterDocument))
                     .treeAggregate(new CountShard(), CountShard::merge, CountShard::merge, AGGREGATION_DEPTH);
         } catch (RuntimeException e) {
             throw new IOException("the Spark job failed: " + CollectionRun.rootMessage(e), e);
@@ -207,13 +193,9 @@ public final class SparkJob implements AutoCloseable {
      * Counts the thesaurus contexts of the raw text below {@code inputs} into {@code into} (an empty counter) as
      * {@link RawTextCounting#count} does on threads, with the same counts and ids: the documents, in the order that
      * run reads them, are cut into consecutive partitions; each task tags and counts its partition into a counter of
-     * its own; the driver appends the completed tasks' counters in partition order.
+     * its own; the driver appends the completed tasks' counters in partition order. With {@code lineBreaksEndSentences}
+     * every line break ends a sentence.
      */
-    public RawTextCounting.Summary countContexts(List<String> inputs, ContextCounter into) throws IOException {
-        return countContexts(inputs, into, false);
-    }
-
-    /** The same; with {@code lineBreaksEndSentences} every line break ends a sentence. */
     public RawTextCounting.Summary countContexts(List<String> inputs, ContextCounter into, boolean lineBreaksEndSentences)
             throws IOException {
         long start = System.nanoTime();

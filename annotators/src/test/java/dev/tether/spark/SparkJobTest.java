@@ -85,7 +85,7 @@ class SparkJobTest {
             CollectionRun.Settings settings = new CollectionRun.Settings(LoadedModels.DEFAULT, id, false,
                     job.parallelism(), false, "test");
             return new CollectionRun(listing, out, settings, done -> { })
-                    .run(job.annotation(LoadedModels.DEFAULT, id, false, out, fault));
+                    .run(job.annotation(LoadedModels.DEFAULT, id, false, false, out, fault));
         }
     }
 
@@ -131,9 +131,9 @@ class SparkJobTest {
         INJECTED.set(0);
         int before = PartitionCounting.built();
         try (SparkJob job = SparkJob.start(SparkMaster.parse("local[2]"), "test")) {
-            clean = job.countRawText(List.of(in.toString()));
+            clean = job.countRawText(List.of(in.toString()), false);
             // Partition 0's first attempt dies after counting its first document: its counts must not survive.
-            faulty = job.countRawText(List.of(in.toString()), (partition, attempt, counted) -> {
+            faulty = job.countRawText(List.of(in.toString()), false, (partition, attempt, counted) -> {
                 if (partition == 0 && attempt == 0 && counted == 1) {
                     INJECTED.incrementAndGet();
                     throw new IOException("injected fault: the executor is lost");
