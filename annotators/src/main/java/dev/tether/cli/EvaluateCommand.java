@@ -89,8 +89,8 @@ final class EvaluateCommand implements Command {
         }
         if (!e.smoothingByLevel().isEmpty()) {
             out.println();
-            out.printf("similarity smoothing by level of the plain back-off (same items)%n%-14s %8s %9s %9s %7s%n",
-                    "plain level", "n", "plain", "smoothed", "gain");
+            out.printf("%s against the plain back-off, by the level the plain back-off decided at (same items)%n%-14s %8s %9s %9s %7s%n",
+                    e.mainScorer(), "plain level", "n", "plain", "model", "gain");
             for (Map.Entry<DecisionBasis, Accuracy[]> b : e.smoothingByLevel().entrySet()) {
                 Accuracy[] pair = b.getValue();
                 out.printf("%-14s %8d %8.2f%% %8.2f%% %+6.2f%n", b.getKey().label(), pair[0].total(), 100 * pair[0].value(),

@@ -298,7 +298,7 @@ final class TrainCommand implements Command {
         RankerSummary.print(model, out);
         if (ModelTrainer.thesaurusUnusedByRanker(model)) {
             out.println("thesaurus: the attachment ranker, kept from the base model, was trained without a thesaurus and"
-                    + " does not read it; only the quadruple scorer's similarity smoothing uses it (add a treebank,"
+                    + " does not read it; only the quadruple scorer uses it (add a treebank,"
                     + " --conllu, to train the ranker's similar-words features)");
         }
         ModelFile.write(model, target);

@@ -2,6 +2,7 @@ package dev.tether.benchmarks;
 
 import dev.tether.attachment.AttachmentSite;
 import dev.tether.attachment.BackedOffScorer;
+import dev.tether.attachment.LearnedQuadrupleScorer;
 import dev.tether.attachment.LabelledQuadruple;
 import dev.tether.attachment.Quadruple;
 import dev.tether.attachment.QuadrupleDecision;
@@ -32,7 +33,8 @@ import java.util.concurrent.TimeUnit;
 
 /**
  * Scoring throughput of the backed-off model, in decisions per second on one thread, side by side with
- * {@link StringKeyedBackOff} (the same estimate over string-keyed {@code HashMap}s) in the same run. Both are
+ * {@link StringKeyedBackOff} (the same estimate over string-keyed {@code HashMap}s) and with the model's learned
+ * scorer over the back-off's evidence ({@link LearnedQuadrupleScorer}, no thesaurus) in the same run. Both are
  * trained on the benchmark's training split (Ratnaparkhi, Reynar &amp; Roukos 1994) and score its devset, cycled to
  * {@value #BATCH} decisions per invocation; {@code BackedOffScorer} gets ids encoded once in setup, the string
  * version gets words normalized once in setup. Setup checks that both give the same decision on every devset
@@ -52,6 +54,8 @@ public class BackedOffScoring {
     public String data;
 
     private BackedOffScorer scorer;
+    /** The model's learned scorer over the same counts (no thesaurus), for what weighing the evidence costs. */
+    private LearnedQuadrupleScorer learned;
     private int[] verbs;
     private int[] nouns1;
     private int[] prepositions;
@@ -73,6 +77,7 @@ public class BackedOffScoring {
         long modelHeap = usedHeap() - before;
         QuadrupleCounts counts = model.quadruples();
         scorer = new BackedOffScorer(counts);
+        learned = model.learnedQuadrupleScorer().orElseThrow(() -> new IllegalStateException("the model has no learned quadruple scorer"));
 
         // The count tables alone, built the same way from the same normalized words, for a like-for-like figure.
         before = usedHeap();
@@ -159,6 +164,14 @@ public class BackedOffScoring {
     public void packedIdTables(Blackhole bh) {
         for (int i = 0; i < BATCH; i++) {
             bh.consume(scorer.decide(verbs[i], nouns1[i], prepositions[i], nouns2[i]));
+        }
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(BATCH)
+    public void learnedOverBackOffEvidence(Blackhole bh) {
+        for (int i = 0; i < BATCH; i++) {
+            bh.consume(learned.decide(verbs[i], nouns1[i], prepositions[i], nouns2[i]));
         }
     }
 

@@ -1,6 +1,7 @@
 package dev.tether.model;
 
 import dev.tether.attachment.AttachmentRanker;
+import dev.tether.attachment.LearnedQuadrupleScorer;
 import dev.tether.coordination.CoordinationRanker;
 import dev.tether.counts.HeadChoiceCounts;
 import dev.tether.counts.QuadrupleCounts;
@@ -69,6 +70,7 @@ public final class ModelFile {
     private static final String COORDINATION_RANKER = "coordination-ranker";
     /** Optional: what raw text changed ({@link DomainReport}, with a version of its own). */
     private static final String DOMAIN_REPORT = "domain-report";
+    private static final String QUADRUPLE_SCORER = "quadruple-scorer";
     private static final java.util.logging.Logger LOG = java.util.logging.Logger.getLogger(ModelFile.class.getName());
 
     private ModelFile() {
@@ -78,7 +80,8 @@ public final class ModelFile {
     public static void write(TetherModel model, Path target) throws IOException {
         byte[] bytes = encode(model.normalizerVersion(), model.sources(), model.quadruples(), model.headChoice(),
                 model.attachmentRanker().orElse(null), model.tagger().orElse(null), model.thesaurus().orElse(null),
-                model.coordinationRanker().orElse(null), model.domainReport().orElse(null));
+                model.coordinationRanker().orElse(null), model.domainReport().orElse(null),
+                model.learnedQuadrupleScorer().orElse(null));
         AtomicFileWriter.write(target, bytes, "model");
     }
 
@@ -115,9 +118,16 @@ public final class ModelFile {
     static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                          HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
                          CoordinationRanker coordination, DomainReport report) throws IOException {
+        return encode(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus, coordination, report, null);
+    }
+
+    static byte[] encode(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                         HeadChoiceCounts headChoice, AttachmentRanker ranker, TaggerSection tagger, Thesaurus thesaurus,
+                         CoordinationRanker coordination, DomainReport report, LearnedQuadrupleScorer learned) throws IOException {
         Map<String, byte[]> sections = sections(normalizerVersion, sources, quadruples, headChoice, ranker, tagger, thesaurus);
         if (coordination != null) sections.put(COORDINATION_RANKER, section(out -> CoordinationRanker.write(coordination, out)));
         if (report != null) sections.put(DOMAIN_REPORT, report.toBytes());
+        if (learned != null) sections.put(QUADRUPLE_SCORER, section(out -> LearnedQuadrupleScorer.write(learned, out)));
         return pack(sections);
     }
 
@@ -261,8 +271,22 @@ public final class ModelFile {
                             + DomainReport.VERSION + ", so 'tether inspect' cannot show it. Train the model again to get one.");
                 }
             }
+            LearnedQuadrupleScorer learned = null;
+            byte[] learnedBytes = sections.get(QUADRUPLE_SCORER);
+            if (learnedBytes != null) {
+                int version = LearnedQuadrupleScorer.readVersion(learnedBytes);
+                if (version == LearnedQuadrupleScorer.VERSION) {
+                    learned = LearnedQuadrupleScorer.read(new DataInputStream(new ByteArrayInputStream(learnedBytes)), counts,
+                            thesaurus, new dev.tether.vocabulary.WordNormalizer());
+                } else {
+                    // Only the quadruple scorer reads it: a model with another version of it scores quadruples by back-off.
+                    LOG.warning(name + " has a learned quadruple scorer of version " + version + "; this build reads version "
+                            + LearnedQuadrupleScorer.VERSION + ", so quadruples are scored by the back-off. Retrain the model "
+                            + "('tether train') to get the learned scorer back.");
+                }
+            }
             return new TetherModel(normalizer, sources, counts, headChoice, ranker, tagger, thesaurus, coordination, report,
-                    java.util.HexFormat.of().formatHex(actual).substring(0, 12));
+                    learned, java.util.HexFormat.of().formatHex(actual).substring(0, 12));
         } catch (ModelFormatException e) {
             throw e;
         } catch (IOException | RuntimeException e) {

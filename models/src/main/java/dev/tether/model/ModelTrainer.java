@@ -11,6 +11,9 @@ import dev.tether.attachment.AttachmentSite;
 import dev.tether.attachment.CandidateStructure;
 import dev.tether.attachment.HeadChoiceScorer;
 import dev.tether.attachment.LabelledQuadruple;
+import dev.tether.attachment.LearnedQuadrupleScorer;
+import dev.tether.attachment.LearnedQuadrupleTrainer;
+import dev.tether.attachment.QuadrupleFeatureExtractor;
 import dev.tether.attachment.Quadruple;
 import dev.tether.attachment.ReviewedChoice;
 import dev.tether.candidates.HeadClass;
@@ -111,6 +114,7 @@ public final class ModelTrainer {
         countQuadruple(lq, quadruples, headChoice);
     }
 
+    /** Counts {@code lq} into {@code q4}, and into {@code heads} unless it is null. */
     private void countQuadruple(LabelledQuadruple lq, QuadrupleCountsBuilder q4, HeadChoiceCountsBuilder heads) {
         Quadruple q = lq.quadruple();
         String v = normalizer.verb(q.verb());
@@ -118,6 +122,7 @@ public final class ModelTrainer {
         String p = normalizer.preposition(q.preposition());
         String n2 = normalizer.noun(q.noun2());
         q4.add(v, n1, p, n2, lq.site(), 1.0);
+        if (heads == null) return;
         heads.addLexical(p, v, HeadClass.VERB.ordinal(), n2, lq.site() == AttachmentSite.VERB, 1.0);
         heads.addLexical(p, n1, HeadClass.NOUN.ordinal(), n2, lq.site() == AttachmentSite.NOUN, 1.0);
     }
@@ -353,13 +358,14 @@ public final class ModelTrainer {
                 if (base.coordinationRanker().isPresent()) coordination = base.coordinationRanker().get();
             }
         }
+        LearnedQuadrupleScorer learned = rankerWanted ? learnedQuadrupleScorer(counts) : null;
         DomainReport report = rawSources.isEmpty() ? null
                 : DomainReport.of(rawSources, rawCounts, baseModels, String.join("+", baseNames), counts);
         try {
             byte[] encoded = ModelFile.encode(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus,
-                    coordination, report);
+                    coordination, report, learned);
             return new TetherModel(WordNormalizer.VERSION, sources, counts, heads, ranker, tagger, thesaurus, coordination,
-                    report, ModelFile.fingerprint(encoded));
+                    report, learned, ModelFile.fingerprint(encoded));
         } catch (IOException e) {
             throw new UncheckedIOException("encoding a model in memory failed", e);
         }
@@ -392,11 +398,51 @@ public final class ModelTrainer {
 
     /**
      * Whether the model will carry a thesaurus that its attachment ranker does not read: a ranker kept from a base
-     * model trained without one (the thesaurus then serves the quadruple scorer's similarity smoothing only).
+     * model trained without one (the thesaurus then serves the quadruple scorer only).
      */
     public static boolean thesaurusUnusedByRanker(TetherModel model) {
         return model.thesaurus().isPresent() && model.attachmentRanker().isPresent()
                 && !model.attachmentRanker().get().families().contains(AttachmentFeatureFamily.SIMILAR_WORDS);
+    }
+
+    /**
+     * The learned quadruple scorer: fitted on the labelled quadruples (given, and read off treebanks) with features
+     * from a jackknife over {@value #JACKKNIFE_FOLDS} contiguous folds of them (base models and raw text always count),
+     * reading the model's thesaurus when it has one. With fewer than {@link LearnedQuadrupleTrainer#MIN_QUADRUPLES}
+     * labelled quadruples (none, or a handful beside a base model), the scorer of the last base model
+     * that has one, over the new counts, unless it read a thesaurus other than this model's; else none.
+     */
+    private LearnedQuadrupleScorer learnedQuadrupleScorer(QuadrupleCounts counts) {
+        List<LabelledQuadruple> labelled = new ArrayList<>(fixedQuadruples);
+        labelled.addAll(exampleQuadruples);
+        if (labelled.size() < LearnedQuadrupleTrainer.MIN_QUADRUPLES) {
+            LearnedQuadrupleScorer kept = null;
+            for (TetherModel base : baseModels) {
+                if (base.learnedQuadrupleScorer().isEmpty()) continue;
+                LearnedQuadrupleScorer s = base.learnedQuadrupleScorer().get();
+                if (s.neighbours() > 0 && !sameThesaurus(base.thesaurus().orElse(null), thesaurus)) continue;
+                kept = new LearnedQuadrupleScorer(s.weights(), s.neighbours(), counts, thesaurus, normalizer);
+            }
+            return kept;
+        }
+        int n = labelled.size();
+        int k = Math.min(JACKKNIFE_FOLDS, n);
+        int neighbours = thesaurus == null ? 0 : QuadrupleFeatureExtractor.NEIGHBOURS;
+        LearnedQuadrupleTrainer trainer = new LearnedQuadrupleTrainer(normalizer);
+        for (int f = 0; f < k; f++) {
+            int from = (int) ((long) n * f / k);
+            int to = (int) ((long) n * (f + 1) / k);
+            QuadrupleCountsBuilder q4 = new QuadrupleCountsBuilder();
+            for (TetherModel base : baseModels) q4.addAll(base.quadruples());
+            for (int r = 0; r < rawEstimates.size(); r++) {
+                if (rawWeights.get(r) > 0) q4.addAll(rawEstimates.get(r).quadruples(), rawWeights.get(r));
+            }
+            for (int j = 0; j < n; j++) if (j < from || j >= to) countQuadruple(labelled.get(j), q4, null);
+            QuadrupleFeatureExtractor extractor = new QuadrupleFeatureExtractor(q4.build(), thesaurus, neighbours,
+                    counts.prepositions());
+            for (int j = from; j < to; j++) trainer.add(labelled.get(j), extractor);
+        }
+        return trainer.train(neighbours, counts, thesaurus, 2);
     }
 
     /** The coordination ranker from the treebank sentences, null when they hold no usable coordination. */

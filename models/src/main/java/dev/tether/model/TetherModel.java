@@ -3,6 +3,7 @@ package dev.tether.model;
 import dev.tether.attachment.AttachmentQuery;
 import dev.tether.attachment.AttachmentRanker;
 import dev.tether.attachment.BackedOffScorer;
+import dev.tether.attachment.LearnedQuadrupleScorer;
 import dev.tether.attachment.LexicalAssociationScorer;
 import dev.tether.attachment.QuadrupleScorer;
 import dev.tether.attachment.SimilarityBackedOffScorer;
@@ -45,6 +46,7 @@ public final class TetherModel {
     private final Thesaurus thesaurus;
     private final QuadrupleScorer quadrupleScorer;
     private final DomainReport domainReport;
+    private final LearnedQuadrupleScorer learnedQuadrupleScorer;
 
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
@@ -59,10 +61,18 @@ public final class TetherModel {
                 null, id);
     }
 
-    /** {@code coordinationRanker} is given the model's thesaurus (if any) for its similarity features. */
     TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
                 HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
                 CoordinationRanker coordinationRanker, DomainReport domainReport, String id) {
+        this(normalizerVersion, sources, quadruples, headChoice, attachmentRanker, tagger, thesaurus, coordinationRanker,
+                domainReport, null, id);
+    }
+
+    /** {@code coordinationRanker} is given the model's thesaurus (if any) for its similarity features. */
+    TetherModel(String normalizerVersion, List<ModelSource> sources, QuadrupleCounts quadruples,
+                HeadChoiceCounts headChoice, AttachmentRanker attachmentRanker, TaggerSection tagger, Thesaurus thesaurus,
+                CoordinationRanker coordinationRanker, DomainReport domainReport, LearnedQuadrupleScorer learned, String id) {
+        this.learnedQuadrupleScorer = learned;
         this.domainReport = domainReport;
         this.coordinationRanker = coordinationRanker == null ? null : coordinationRanker.withThesaurus(thesaurus);
         this.normalizerVersion = normalizerVersion;
@@ -75,6 +85,7 @@ public final class TetherModel {
         this.attachmentRanker = attachmentRanker == null ? null : attachmentRanker.withThesaurus(thesaurus);
         this.thesaurus = thesaurus;
         this.quadrupleScorer = unlabelledOnly(sources) ? new LexicalAssociationScorer(quadruples)
+                : learned != null ? learned
                 : thesaurus == null ? new BackedOffScorer(quadruples)
                 : new SimilarityBackedOffScorer(quadruples, thesaurus, normalizer);
     }
@@ -113,10 +124,15 @@ public final class TetherModel {
      * The model's quadruple scorer. A model counted from unlabelled text alone uses lexical association (Hindle &amp;
      * Rooth 1993), the method made for such counts: its estimates compare how often verb and noun take the
      * preposition, which survives the skew of the unambiguous cases towards verbs that defeats the back-off's pooled
-     * relative frequencies (quadruple devset: 76.26% against 69.82%, README). Otherwise the back-off smoothed by the thesaurus ({@link SimilarityBackedOffScorer}) when
+     * relative frequencies (quadruple devset: 76.26% against 69.82%, README). Otherwise the learned scorer over the
+     * back-off's evidence ({@link LearnedQuadrupleScorer}) when the model was trained with labelled quadruples or
+     * treebanks by this version; for older models the back-off smoothed by the thesaurus ({@link SimilarityBackedOffScorer}) when
      * the model has one, else the plain back-off ({@link BackedOffScorer}). Built once; thread-safe.
      */
     public QuadrupleScorer quadrupleScorer() { return quadrupleScorer; }
+
+    /** The learned quadruple scorer, present when the model was trained with labelled quadruples (or treebanks). */
+    public Optional<LearnedQuadrupleScorer> learnedQuadrupleScorer() { return Optional.ofNullable(learnedQuadrupleScorer); }
     /**
      * What raw text of the model's domain changed ({@link DomainReport}), for a model trained with {@code --raw} by
      * this version of Tether; empty for other models.

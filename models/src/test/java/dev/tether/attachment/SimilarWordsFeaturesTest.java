@@ -31,15 +31,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * ranker; with it, each goes where its neighbours go, and the evidence names those neighbours.
  */
 class SimilarWordsFeaturesTest {
-    private static final String[] VERBS = {"replaced", "inspected", "fitted", "cleaned", "checked"};
-    private static final String[] NOUNS = {"valve", "gasket", "seal", "hose", "bearing"};
+    static final String[] VERBS = {"replaced", "inspected", "fitted", "cleaned", "checked"};
+    static final String[] NOUNS = {"valve", "gasket", "seal", "hose", "bearing"};
     /** Thirty tools and thirty defects, so that many occur in only a few decisions, as most words of real text do. */
-    private static final String[] TOOLS = compounds(new String[] {"torque", "socket", "hex", "pipe", "box", "ring"},
+    static final String[] TOOLS = compounds(new String[] {"torque", "socket", "hex", "pipe", "box", "ring"},
             new String[] {"wrench", "key", "driver", "spanner", "bar"});
-    private static final String[] DEFECTS = compounds(new String[] {"hairline", "surface", "deep", "edge", "weld", "seam"},
+    static final String[] DEFECTS = compounds(new String[] {"hairline", "surface", "deep", "edge", "weld", "seam"},
             new String[] {"crack", "dent", "pit", "scratch", "gouge"});
-    private static final String UNSEEN_TOOL = "ratchet";
-    private static final String UNSEEN_DEFECT = "fracture";
+    static final String UNSEEN_TOOL = "ratchet";
+    static final String UNSEEN_DEFECT = "fracture";
 
     @TempDir
     Path dir;
@@ -57,7 +57,7 @@ class SimilarWordsFeaturesTest {
     }
 
     /** Sentences where tools are held and used and defects are found and repaired, the unseen two among them. */
-    private static Thesaurus thesaurus() {
+    static Thesaurus thesaurus() {
         ContextCounter counter = new ContextCounter();
         Random r = new Random(3);
         String[] tools = with(TOOLS, UNSEEN_TOOL);
