@@ -79,7 +79,7 @@ public final class LearnedQuadrupleTrainer {
             int end = d + 1 < n ? start.get(d + 1) : keys.size();
             for (int e = start.get(d); e < end; e++) data.addFeature(space.id(keys.get(e)), values.get(e));
         }
-        RankerTrainer.Result r = new RankerTrainer(STRENGTHS, RankerTrainer.DEFAULT_FOLDS, new Lbfgs(500, 1e-7))
+        RankerTrainer.Result r = new RankerTrainer(STRENGTHS, RankerTrainer.DEFAULT_FOLDS, new Lbfgs(3000, 1e-11))
                 .threads(threads).train(data.seal(), space.size());
         RankerModel weights = new RankerModel(space, r.ranker(), r.l2(), r.trials(), n, r.temperature());
         return new LearnedQuadrupleScorer(weights, neighbours, counts, thesaurus, normalizer);
